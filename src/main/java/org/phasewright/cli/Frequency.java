@@ -1,0 +1,55 @@
+package org.phasewright.cli;
+
+import java.util.Locale;
+
+/**
+ * A frequency as the user wrote it: the number, its unit, and its value in hertz. Harmonics keep
+ * the user's unit ({@code 1485rpm} times 2 is {@code 2970 rpm}; {@code period:12h} times 2 is
+ * {@code period 6 h}), so tables can show both the user's figure and hertz.
+ *
+ * @param value   the number in the user's unit (for a period: the period in {@code periodUnit})
+ * @param unit    the unit
+ * @param periodUnit for a period, the canonical time unit word ("h", "day", ...); else null
+ * @param hertz   the frequency in hertz
+ */
+record Frequency(double value, FrequencyUnit unit, String periodUnit, double hertz) {
+
+    static Frequency hertz(double hz) {
+        return new Frequency(hz, FrequencyUnit.HERTZ, null, hz);
+    }
+
+    /** The k-th harmonic, in the same unit. */
+    Frequency times(int k) {
+        if (unit == FrequencyUnit.PERIOD) {
+            return new Frequency(value / k, unit, periodUnit, hertz * k);
+        }
+        return new Frequency(value * k, unit, periodUnit, hertz * k);
+    }
+
+    /** True when the user wrote plain hertz, so a second column in their unit adds nothing. */
+    boolean isHertz() {
+        return unit == FrequencyUnit.HERTZ;
+    }
+
+    /** The figure in the user's unit, e.g. {@code 1485 rpm}, {@code 2 /day}, {@code period 12.42 h}. */
+    String display() {
+        if (unit == FrequencyUnit.PERIOD) {
+            return "period " + number(value) + " " + periodUnit;
+        }
+        return number(value) + " " + unit.symbol();
+    }
+
+    static String number(double v) {
+        String s = String.format(Locale.ROOT, "%.8g", v);
+        if (s.contains("e") || s.contains("E")) {
+            return s;
+        }
+        if (s.contains(".")) {
+            s = s.replaceAll("0+$", "");
+            if (s.endsWith(".")) {
+                s = s.substring(0, s.length() - 1);
+            }
+        }
+        return s;
+    }
+}

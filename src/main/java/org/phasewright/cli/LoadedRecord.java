@@ -1,0 +1,19 @@
+package org.phasewright.cli;
+
+import java.util.List;
+import org.phasewright.series.Series;
+
+/**
+ * A record read from a file, with what the file held besides it.
+ *
+ * @param where     how messages name the file (its path as the user gave it)
+ * @param format    the file's format in words, e.g. "CSV" or "WAV, 16-bit PCM"
+ * @param channels  the names of the signal channels the file holds (value columns, WAV channels)
+ * @param channel   the name of the channel that became {@code series}
+ * @param series    the signal, with the requested covariates attached
+ */
+record LoadedRecord(String where, String format, List<String> channels, String channel, Series series) {
+    LoadedRecord {
+        channels = List.copyOf(channels);
+    }
+}

@@ -1,0 +1,64 @@
+package org.phasewright.cli;
+
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.Optional;
+import org.phasewright.model.ModelSpec;
+
+/**
+ * A model ready to fit, with the frequencies as the user wrote them, so that reports can show
+ * the user's unit beside hertz.
+ *
+ * @param spec         the model
+ * @param frequencies  user frequency by sinusoid term label
+ * @param fundamentals user fundamental by harmonic-series term label
+ */
+record ModelPlan(ModelSpec spec, Map<String, Frequency> frequencies, Map<String, Frequency> fundamentals) {
+
+    ModelPlan {
+        frequencies = Map.copyOf(frequencies);
+        fundamentals = Map.copyOf(fundamentals);
+    }
+
+    /** A plan for a model that came without user frequencies (e.g. from a model file alone). */
+    static ModelPlan of(ModelSpec spec) {
+        return new ModelPlan(spec, Map.of(), Map.of());
+    }
+
+    /** The user's figure for harmonic {@code k} of series {@code label}, or of sinusoid {@code label} when k is 0. */
+    Optional<Frequency> asGiven(String label, int k) {
+        if (k == 0) {
+            return Optional.ofNullable(frequencies.get(label));
+        }
+        return Optional.ofNullable(fundamentals.get(label)).map(f -> f.times(k));
+    }
+
+    static Builder builder() {
+        return new Builder();
+    }
+
+    static final class Builder {
+        private ModelSpec spec;
+        private final Map<String, Frequency> frequencies = new LinkedHashMap<>();
+        private final Map<String, Frequency> fundamentals = new LinkedHashMap<>();
+
+        Builder spec(ModelSpec s) {
+            this.spec = s;
+            return this;
+        }
+
+        Builder frequency(String label, Frequency f) {
+            frequencies.put(label, f);
+            return this;
+        }
+
+        Builder fundamental(String label, Frequency f) {
+            fundamentals.put(label, f);
+            return this;
+        }
+
+        ModelPlan build() {
+            return new ModelPlan(spec, frequencies, fundamentals);
+        }
+    }
+}

@@ -1,0 +1,74 @@
+package org.phasewright.cli;
+
+import java.util.Locale;
+
+/**
+ * How the readable reports write numbers: estimates to the precision their standard error
+ * supports (two significant digits of the SE, common practice in reporting measurements),
+ * statistics to four significant digits, p-values in exponent form when small, shares in percent.
+ */
+final class Numbers {
+
+    private Numbers() {
+    }
+
+    /** Decimal places that show two significant digits of {@code se} (0..12). */
+    static int placesFor(double se) {
+        if (!(se > 0) || !Double.isFinite(se)) {
+            return 4;
+        }
+        int p = 1 - (int) Math.floor(Math.log10(se));
+        return Math.max(0, Math.min(12, p));
+    }
+
+    static String fixed(double v, int places) {
+        if (Double.isNaN(v)) {
+            return "n/a";
+        }
+        String s = String.format(Locale.ROOT, "%." + places + "f", v);
+        return s.matches("-0\\.?0*") ? s.substring(1) : s;
+    }
+
+    /** Four significant digits, plain where readable. */
+    static String sig(double v) {
+        if (Double.isNaN(v)) {
+            return "n/a";
+        }
+        if (Double.isInfinite(v)) {
+            return v > 0 ? "inf" : "-inf";
+        }
+        double a = Math.abs(v);
+        if (a != 0 && (a < 1e-3 || a >= 1e7)) {
+            return String.format(Locale.ROOT, "%.3e", v);
+        }
+        return Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v)));
+    }
+
+    static String pValue(double p) {
+        if (Double.isNaN(p)) {
+            return "n/a";
+        }
+        if (p < 1e-16) {
+            return "<1e-16";
+        }
+        if (p < 1e-3) {
+            return String.format(Locale.ROOT, "%.1e", p);
+        }
+        return String.format(Locale.ROOT, "%.4f", p);
+    }
+
+    static String percent(double share) {
+        if (Double.isNaN(share)) {
+            return "n/a";
+        }
+        double pc = 100 * share;
+        if (pc != 0 && Math.abs(pc) < 0.01) {
+            return "<0.01";
+        }
+        return String.format(Locale.ROOT, "%.2f", pc);
+    }
+
+    static String hertz(double f) {
+        return Frequency.number(f);
+    }
+}
