@@ -24,9 +24,11 @@ import org.phasewright.series.Series;
  * {@value #RANK_TOLERANCE} |r_11| is a linear combination of the others, and the fit stops naming the
  * columns involved); apply Q' to y by the stored Householder reflectors (never forming Q); solve
  * R z = Q'y by back substitution; undo the scaling and the permutation. The residual is
- * r = Q (0, (Q'y)_(p+1..n)), which is backward stable. One step of iterative refinement on the
- * residual, with the residual accumulated in compensated (two-sum/FMA) arithmetic, recovers digits
- * lost to ill-conditioning.
+ * r = y - X b. Then {@value #REFINEMENTS} steps of iterative refinement on the augmented system
+ * [I A; A' 0] [r; z] = [y; 0] (Bjorck and Golub 1967; Bjorck, Numerical Methods for Least Squares
+ * Problems, 1996, 2.9), with both right-hand sides f = y - r - A z and g = -A' r accumulated in
+ * compensated arithmetic (Ogita, Rump and Oishi 2005), recover the digits that ill-conditioning
+ * costs, also when the residual is large (where plain refinement of z alone cannot).
  *
  * <p>Cost: 2 n p^2 - 2 p^3 / 3 flops for the factorization, O(n p) for everything else, 16 n p bytes
  * of memory (the design and its factor). The condition number is that of the column-scaled design,
@@ -38,6 +40,9 @@ final class DenseQrSolver {
     static final double RANK_TOLERANCE = 1e-11;
 
     private static final int BLOCK = 2048;
+
+    /** Refinement steps on the augmented system; each costs O(n p). */
+    static final int REFINEMENTS = 3;
 
     private DenseQrSolver() {
     }
@@ -122,16 +127,10 @@ final class DenseQrSolver {
         double[] qty = y.clone();
         applyQt(qrData, gammas, p, n, qty);
         double[] z = backSubstitute(rm, qty, p);
-        // residual in the scaled problem: r = y - XS P z, refined once with compensated sums
         double[] beta = unscale(z, piv, scale);
         double[] resid = residual(x, y, beta, n, p);
-        double[] corr = resid.clone();
-        applyQt(qrData, gammas, p, n, corr);
-        double[] dz = backSubstitute(rm, corr, p);
-        double[] dBeta = unscale(dz, piv, scale);
-        for (int j = 0; j < p; j++) {
-            beta[j] += dBeta[j];
-        }
+        refine(x, y, scale, piv, qrData, gammas, rm, z, resid, n, p);
+        beta = unscale(z, piv, scale);
         resid = residual(x, y, beta, n, p);
         double rss = 0;
         for (double e : resid) {
@@ -151,6 +150,86 @@ final class DenseQrSolver {
         }
         boolean constantInSpan = constantInSpan(qrData, gammas, sqrtW, n, p);
         return new LeastSquaresSolution(beta, c, rss, n, conditionNumber(rm, p), constantInSpan, swy, swy2, sw, slw);
+    }
+
+    /**
+     * Refines z (scaled, pivoted coefficients) and r in place: each step solves
+     * [I A; A' 0] [dr; dz] = [f; g] through the QR factors as h = R^-T g, d = Q' f,
+     * dz = R^-1 (d_1 - h), dr = Q (h, d_2).
+     */
+    private static void refine(double[] x, double[] y, double[] scale, int[] piv, double[][] qrData, double[] gammas,
+                               double[][] rm, double[] z, double[] r, int n, int p) {
+        for (int step = 0; step < REFINEMENTS; step++) {
+            double[] beta = unscale(z, piv, scale);
+            double[] f = residual(x, y, beta, n, p);
+            for (int i = 0; i < n; i++) {
+                f[i] -= r[i];
+            }
+            double[] g = new double[p];
+            for (int j = 0; j < p; j++) {
+                g[j] = -compensatedColumnDot(x, r, piv[j], n, p) / scale[piv[j]];
+            }
+            double[] h = forwardSubstituteTransposed(rm, g, p);
+            applyQt(qrData, gammas, p, n, f);
+            double[] rhs = new double[p];
+            for (int j = 0; j < p; j++) {
+                rhs[j] = f[j] - h[j];
+            }
+            double[] dz = backSubstitute(rm, rhs, p);
+            System.arraycopy(h, 0, f, 0, p);
+            applyQ(qrData, gammas, p, n, f);
+            for (int j = 0; j < p; j++) {
+                z[j] += dz[j];
+            }
+            for (int i = 0; i < n; i++) {
+                r[i] += f[i];
+            }
+        }
+    }
+
+    /** v := Q v, the reflectors applied in reverse order. */
+    private static void applyQ(double[][] qrData, double[] gammas, int p, int n, double[] v) {
+        for (int j = p - 1; j >= 0; j--) {
+            double[] u = qrData[j];
+            double s = v[j];
+            for (int k = j + 1; k < n; k++) {
+                s += u[k] * v[k];
+            }
+            s *= gammas[j];
+            v[j] -= s;
+            for (int k = j + 1; k < n; k++) {
+                v[k] -= u[k] * s;
+            }
+        }
+    }
+
+    /** Solves R' h = g by forward substitution. */
+    private static double[] forwardSubstituteTransposed(double[][] rm, double[] g, int p) {
+        double[] h = new double[p];
+        for (int i = 0; i < p; i++) {
+            double s = g[i];
+            for (int k = 0; k < i; k++) {
+                s -= rm[k][i] * h[k];
+            }
+            h[i] = s / rm[i][i];
+        }
+        return h;
+    }
+
+    /** Column j of the row-major X dotted with v, in compensated arithmetic. */
+    private static double compensatedColumnDot(double[] x, double[] v, int j, int n, int p) {
+        double s = 0;
+        double c = 0;
+        for (int i = 0; i < n; i++) {
+            double a = x[i * p + j];
+            double prod = a * v[i];
+            double perr = Math.fma(a, v[i], -prod);
+            double t = s + prod;
+            double bb = t - s;
+            c += (s - (t - bb)) + (prod - bb) + perr;
+            s = t;
+        }
+        return s + c;
     }
 
     private static double[][] upperR(double[][] qrData, int p) {
