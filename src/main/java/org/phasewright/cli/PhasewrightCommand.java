@@ -19,14 +19,14 @@ import picocli.CommandLine.Spec;
         versionProvider = PhasewrightCommand.Version.class,
         sortOptions = false,
         usageHelpAutoWidth = true,
-        description = {
-            "Decomposes a recorded signal by least squares on harmonic bases and reports every",
-            "component's amplitude and phase with standard errors, intervals and tests."},
+        description = "Decomposes a recorded signal by least squares on harmonic bases and reports every"
+                + " component's amplitude and phase with standard errors, intervals and tests.",
         subcommands = {SurveyCommand.class, FitCommand.class, CommandLine.HelpCommand.class},
         footerHeading = "%nExamples:%n",
         footer = {
             "  phasewright survey demo-signals/pump-accelerometer.csv",
-            "  phasewright fit demo-signals/motor-drive-current.csv --fundamental 60 --harmonics 7",
+            "  phasewright fit demo-signals/motor-drive-current.csv --fundamental 60 \\",
+            "      --harmonics 7",
             "",
             "Exit codes: 0 done, 2 usage error, 3 input error (file or format),",
             "4 numerical problem (rank-deficient design, too few samples), 1 internal error."})
