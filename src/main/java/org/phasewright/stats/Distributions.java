@@ -51,8 +51,32 @@ public final class Distributions {
         return 0.5 * Math.log(2 * Math.PI) + (z + 0.5) * Math.log(t) - t + Math.log(sum);
     }
 
-    private static double logBeta(double a, double b) {
-        return logGamma(a) + logGamma(b) - logGamma(a + b);
+    /**
+     * log B(a, b). When an argument reaches 20 the log-gamma differences are taken through Stirling's
+     * series (DLMF 5.11.1) with log1p, which avoids the cancellation of three large log-gamma values.
+     */
+    static double logBeta(double a, double b) {
+        double small = Math.min(a, b);
+        double big = Math.max(a, b);
+        if (big < 20) {
+            return logGamma(a) + logGamma(b) - logGamma(a + b);
+        }
+        double sum = a + b;
+        if (small < 20) {
+            // log Gamma(big) - log Gamma(big + small)
+            double d = -(big - 0.5) * Math.log1p(small / big) - small * Math.log(sum) + small
+                    + stirlingCorrection(big) - stirlingCorrection(sum);
+            return logGamma(small) + d;
+        }
+        return 0.5 * Math.log(2 * Math.PI) - a * Math.log1p(b / a) - b * Math.log1p(a / b)
+                - 0.5 * Math.log(a) - 0.5 * Math.log(b) + 0.5 * Math.log(sum)
+                + stirlingCorrection(a) + stirlingCorrection(b) - stirlingCorrection(sum);
+    }
+
+    /** log Gamma(x) - [(x - 1/2) ln x - x + ln(2 pi)/2], by Stirling's series, for x >= 20. */
+    private static double stirlingCorrection(double x) {
+        double x2 = x * x;
+        return (1.0 / 12 - (1.0 / 360 - (1.0 / 1260 - 1.0 / (1680 * x2)) / x2) / x2) / x;
     }
 
     /** Regularized incomplete beta function I_x(a, b). */
