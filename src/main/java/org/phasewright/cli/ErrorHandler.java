@@ -13,7 +13,8 @@ import picocli.CommandLine.ParseResult;
 
 /**
  * Maps every failure to one line on standard error and an exit code: usage errors (bad options,
- * bad values) give 2, input problems (files, formats, columns) give 3, numerical problems
+ * bad values) give 2, file problems (unreadable or malformed input, columns that are not there,
+ * outputs that cannot be written) give 3, numerical problems
  * ({@link ModelException}: rank deficiency, too few samples) give 4, anything else 1. The line
  * starts with the command's name, so a script's log shows where it failed.
  */
@@ -47,7 +48,9 @@ final class ErrorHandler implements IExecutionExceptionHandler, IParameterExcept
         if (ex instanceof ModelException) {
             return ExitCodes.NUMERICAL;
         }
-        if (ex instanceof InputException || ex instanceof IOException || ex instanceof UncheckedIOException) {
+        if (ex instanceof InputProblem || ex instanceof org.phasewright.io.InputException
+                || ex instanceof org.phasewright.io.OutputException || ex instanceof IOException
+                || ex instanceof UncheckedIOException) {
             return ExitCodes.INPUT;
         }
         return ExitCodes.INTERNAL;
@@ -58,7 +61,7 @@ final class ErrorHandler implements IExecutionExceptionHandler, IParameterExcept
         if (e instanceof NoSuchFileException n) {
             return "no such file: " + n.getFile();
         }
-        if (e instanceof IOException && !(ex instanceof InputException)) {
+        if (e instanceof IOException && !(ex instanceof InputProblem)) {
             return "could not read or write " + e.getMessage();
         }
         return ex.getMessage();

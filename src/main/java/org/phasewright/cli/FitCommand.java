@@ -12,6 +12,7 @@ import java.util.concurrent.Callable;
 import org.phasewright.fit.FitOptions;
 import org.phasewright.fit.FitResult;
 import org.phasewright.fit.Fitter;
+import org.phasewright.io.write.AtomicFile;
 import org.phasewright.model.ModelSpec;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -104,7 +105,7 @@ final class FitCommand implements Callable<Integer> {
                     + " file; fit one file, or give the fundamental");
         }
         if (outDir != null && Files.exists(outDir) && !Files.isDirectory(outDir)) {
-            throw new InputException("--out " + outDir + " is a file, not a directory");
+            throw new InputProblem("--out " + outDir + " is a file, not a directory");
         }
         RecordRequest request = input.request(terms.covariates);
         ModelSpec base = terms.modelFile == null ? new ModelSpec(List.of()) : FitOutputs.readModel(terms.modelFile);
@@ -117,20 +118,23 @@ final class FitCommand implements Callable<Integer> {
     private int single(Path file, RecordRequest request, ModelSpec base) throws IOException {
         PrintWriter out = spec.commandLine().getOut();
         Fitted f;
-        try (Progress progress = Progress.start("fit", 3, quiet)) {
-            f = fitOne(file, request, base, progress);
+        try (Progress progress = Progress.start("fit", 1000, quiet)) {
+            RecordSource reading = root.source().withProgress((bytes, total, samples) ->
+                    progress.at(total > 0 ? 800 * bytes / total : 0));
+            f = fitOne(reading, file, request, base);
+            progress.at(950);
             if (saveModel != null) {
                 FitOutputs.writeModel(saveModel, f.result().model());
             }
             if (outDir != null) {
                 FitOutputs.writeDirectory(outDir, f.record(), f.result());
             }
-            progress.step("written");
+            progress.at(1000);
         }
         if (json) {
             FitOutputs.printJson(out, f.result());
         } else {
-            FitReport.print(out, f.record().where(), f.record().series(), f.plan(), f.result());
+            FitReport.print(out, f.record().where(), f.record().series(), f.record().unit(), f.plan(), f.result());
             if (outDir != null) {
                 out.println();
                 out.println("Wrote " + FitOutputs.FILES + " to " + outDir + ".");
@@ -150,7 +154,7 @@ final class FitCommand implements Callable<Integer> {
         try (Progress progress = Progress.start("fit", files.size(), quiet)) {
             for (Path file : files) {
                 try {
-                    Fitted f = fitOne(file, request, base, Progress.silent());
+                    Fitted f = fitOne(root.source(), file, request, base);
                     summary.ok(file.toString(), f.result());
                     if (outDir != null) {
                         FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), f.record(), f.result());
@@ -176,7 +180,10 @@ final class FitCommand implements Callable<Integer> {
         }
         Path target = summaryFile != null ? summaryFile : outDir != null ? outDir.resolve("summary.csv") : null;
         if (target != null) {
-            AtomicFiles.write(target, summary::write);
+            if (target.toAbsolutePath().getParent() != null) {
+                Files.createDirectories(target.toAbsolutePath().getParent());
+            }
+            AtomicFile.writeText(target, true, summary::write);
             if (!json) {
                 out.println("Fitted " + files.size() + " files; summary in " + target + ".");
             }
@@ -187,14 +194,12 @@ final class FitCommand implements Callable<Integer> {
         return worst;
     }
 
-    private Fitted fitOne(Path file, RecordRequest request, ModelSpec base, Progress progress) {
-        LoadedRecord record = root.source().load(file, request);
-        progress.step("read");
+    private Fitted fitOne(RecordSource source, Path file, RecordRequest request, ModelSpec base) {
+        LoadedRecord record = source.load(file, request);
         TermOptions.SuggestedFundamental suggested = terms.autoFundamental()
                 ? Suggestions.fundamental(record) : null;
         ModelPlan plan = terms.plan(base, record.series(), record.where(), suggested);
         FitResult result = Fitter.fit(record.series(), plan.spec(), FitOptions.defaults().withLevel(level));
-        progress.step("fitted");
         return new Fitted(record, plan, result);
     }
 

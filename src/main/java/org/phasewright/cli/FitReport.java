@@ -23,23 +23,24 @@ final class FitReport {
     private FitReport() {
     }
 
-    static void print(PrintWriter out, String where, Series series, ModelPlan plan, FitResult r) {
+    static void print(PrintWriter out, String where, Series series, String unit, ModelPlan plan, FitResult r) {
         out.println(where + ": " + describe(series));
         out.println();
         String lvl = Numbers.sig(100 * r.level()) + " %";
         periodic(out, plan, r, lvl);
-        scalars(out, r, lvl);
-        groups(out, r);
-        summary(out, r);
+        scalars(out, plan, r, lvl);
+        groups(out, plan, r);
+        summary(out, r, unit);
         warnings(out, r);
         out.flush();
     }
 
     static String describe(Series s) {
-        String sampling = s.isUniform() ? s.size() + " samples at " + Numbers.hertz(s.rate().getAsDouble()) + " Hz"
-                : s.size() + " unevenly spaced samples";
+        String sampling = !s.isUniform() ? s.size() + " unevenly spaced samples"
+                : s.rate().getAsDouble() >= 1 ? s.size() + " samples at " + Numbers.hertz(s.rate().getAsDouble()) + " Hz"
+                : s.size() + " samples, one every " + Numbers.duration(1 / s.rate().getAsDouble());
         String gaps = s.missingCount() == 0 ? "no gaps" : s.missingCount() + " missing";
-        return sampling + " over " + Numbers.sig(s.duration()) + " s (" + gaps + ")";
+        return sampling + " over " + Numbers.duration(s.duration()) + " (" + gaps + ")";
     }
 
     private static void periodic(PrintWriter out, ModelPlan plan, FitResult r, String lvl) {
@@ -52,10 +53,10 @@ final class FitReport {
                         "phase (deg)", "SE (deg)", "F", "p", "share (%)");
         for (TermReport tr : r.terms()) {
             if (tr instanceof SinusoidReport s) {
-                row(t, anyUnit, s.label(), plan.asGiven(s.label(), 0).map(Frequency::display).orElse(""), s);
+                row(t, anyUnit, plan.nameOf(s.label()), plan.asGiven(s.label(), 0).map(Frequency::display).orElse(""), s);
             } else if (tr instanceof HarmonicSeriesReport h) {
                 for (SinusoidReport s : h.harmonics()) {
-                    String name = "harmonic " + s.harmonic() + " of " + Numbers.hertz(h.fundamentalHz()) + " Hz";
+                    String name = plan.harmonicName(h.label(), h.fundamentalHz(), s.harmonic());
                     row(t, anyUnit, name, plan.asGiven(h.label(), s.harmonic()).map(Frequency::display).orElse(""), s);
                 }
             }
@@ -89,30 +90,30 @@ final class FitReport {
         }
     }
 
-    private static void scalars(PrintWriter out, FitResult r, String lvl) {
+    private static void scalars(PrintWriter out, ModelPlan plan, FitResult r, String lvl) {
         TextTable t = new TextTable(2, "term", "kind", "estimate", "SE", lvl + " low", lvl + " high", "t", "p",
                 "share (%)");
         for (TermReport tr : r.terms()) {
             if (tr instanceof ScalarReport s) {
                 int p = Numbers.placesFor(s.stdError());
-                t.row(s.label(), s.kind().replace('_', ' '), Numbers.fixed(s.estimate(), p), Numbers.fixed(s.stdError(), p),
+                t.row(plan.nameOf(s.label()), s.kind().replace('_', ' '), Numbers.fixed(s.estimate(), p), Numbers.fixed(s.stdError(), p),
                         Numbers.fixed(s.ciLow(), p), Numbers.fixed(s.ciHigh(), p), Numbers.sig(s.t()),
-                        Numbers.pValue(s.pValue()), Numbers.percent(s.varianceShare()));
+                        Numbers.pValue(s.pValue()), s.kind().equals("intercept") ? "-" : Numbers.percent(s.varianceShare()));
             }
         }
         if (t.isEmpty()) {
             return;
         }
-        out.println("Level, steps and covariates");
+        out.println("Level, steps and covariates  (the constant level has no share of the variation about the mean)");
         t.print(out, "  ");
         out.println();
     }
 
-    private static void groups(PrintWriter out, FitResult r) {
+    private static void groups(PrintWriter out, ModelPlan plan, FitResult r) {
         TextTable t = new TextTable(1, "term", "columns", "F", "p", "share (%)");
         for (TermReport tr : r.terms()) {
             if (tr instanceof HarmonicSeriesReport h) {
-                t.row(h.label() + " (all harmonics together)", Integer.toString(h.df1()), Numbers.sig(h.fStat()),
+                t.row(plan.nameOf(h.label()) + " (all harmonics together)", Integer.toString(h.df1()), Numbers.sig(h.fStat()),
                         Numbers.pValue(h.pValue()), Numbers.percent(h.varianceShare()));
             } else if (tr instanceof GroupReport g) {
                 t.row(g.label(), Integer.toString(g.columns()), Numbers.sig(g.fStat()), Numbers.pValue(g.pValue()),
@@ -127,16 +128,17 @@ final class FitReport {
         out.println();
     }
 
-    private static void summary(PrintWriter out, FitResult r) {
+    private static void summary(PrintWriter out, FitResult r, String unit) {
         out.println("Fit");
         out.println("  " + r.n() + " samples used, " + r.p() + " coefficients, " + r.dof() + " residual degrees of freedom.");
-        out.println("  Residual standard deviation " + Numbers.sig(r.residualSd()) + " (in the signal's unit).");
+        out.println("  Residual standard deviation " + Numbers.sig(r.residualSd())
+                + (unit == null || unit.isEmpty() ? " (in the signal's unit)." : " " + unit + "."));
         out.println(String.format(Locale.ROOT, "  The model explains %s %% of the %s variation (adjusted %s %%).",
                 Numbers.percent(r.rSquared()), r.centredRSquared() ? "" : "uncentred", Numbers.percent(r.adjustedRSquared()))
                 .replace("the  variation", "the variation"));
         if (!Double.isNaN(r.overallF())) {
             out.println("  All terms together: F = " + Numbers.sig(r.overallF()) + " on " + r.overallDf1() + " and "
-                    + r.overallDf2() + " degrees of freedom, p = " + Numbers.pValue(r.overallP()) + ".");
+                    + r.overallDf2() + " degrees of freedom, p " + Numbers.pRelation(r.overallP()) + ".");
         }
         out.println("  Condition number of the scaled design " + Numbers.sig(r.conditionNumber()) + ".");
         out.println();

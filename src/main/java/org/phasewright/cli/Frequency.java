@@ -40,9 +40,14 @@ record Frequency(double value, FrequencyUnit unit, String periodUnit, double her
     }
 
     static String number(double v) {
-        String s = String.format(Locale.ROOT, "%.8g", v);
-        if (s.contains("e") || s.contains("E")) {
-            return s;
+        String s = String.format(Locale.ROOT, "%.10g", v);
+        int e = s.indexOf('e');
+        if (e >= 0) {
+            String mantissa = s.substring(0, e);
+            if (mantissa.contains(".")) {
+                mantissa = mantissa.replaceAll("0+$", "").replaceAll("\\.$", "");
+            }
+            return mantissa + s.substring(e);
         }
         if (s.contains(".")) {
             s = s.replaceAll("0+$", "");

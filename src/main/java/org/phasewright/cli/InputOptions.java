@@ -31,6 +31,6 @@ final class InputOptions {
             throw new UsageException("--channel counts from 1, got " + channel);
         }
         return new RecordRequest(timeColumn, valueColumn, channel, rate == null ? null : rate.hertz(),
-                java.util.List.copyOf(covariates));
+                covariates, false);
     }
 }

@@ -1,6 +1,7 @@
 package org.phasewright.cli;
 
 import java.util.List;
+import org.phasewright.io.read.SamplingSummary;
 import org.phasewright.series.Series;
 
 /**
@@ -11,8 +12,11 @@ import org.phasewright.series.Series;
  * @param channels  the names of the signal channels the file holds (value columns, WAV channels)
  * @param channel   the name of the channel that became {@code series}
  * @param series    the signal, with the requested covariates attached
+ * @param unit      the signal's unit as the file states it ("" when it does not)
+ * @param sampling  how the reader found the samples spaced, when it examined timestamps (else null)
  */
-record LoadedRecord(String where, String format, List<String> channels, String channel, Series series) {
+record LoadedRecord(String where, String format, List<String> channels, String channel, Series series,
+                    String unit, SamplingSummary sampling) {
     LoadedRecord {
         channels = List.copyOf(channels);
     }

@@ -12,17 +12,44 @@ import org.phasewright.model.ModelSpec;
  * @param spec         the model
  * @param frequencies  user frequency by sinusoid term label
  * @param fundamentals user fundamental by harmonic-series term label
+ * @param steps        the step time as the user wrote it, by step term label
  */
-record ModelPlan(ModelSpec spec, Map<String, Frequency> frequencies, Map<String, Frequency> fundamentals) {
+record ModelPlan(ModelSpec spec, Map<String, Frequency> frequencies, Map<String, Frequency> fundamentals,
+                 Map<String, String> steps) {
 
     ModelPlan {
         frequencies = Map.copyOf(frequencies);
         fundamentals = Map.copyOf(fundamentals);
+        steps = Map.copyOf(steps);
     }
 
     /** A plan for a model that came without user frequencies (e.g. from a model file alone). */
     static ModelPlan of(ModelSpec spec) {
-        return new ModelPlan(spec, Map.of(), Map.of());
+        return new ModelPlan(spec, Map.of(), Map.of(), Map.of());
+    }
+
+    /** How reports name a term: the user's frequency or time where one was given, else the term's label. */
+    String nameOf(String label) {
+        Frequency f0 = fundamentals.get(label);
+        if (f0 != null && !f0.isHertz()) {
+            return "harmonics of " + f0.display();
+        }
+        Frequency f = frequencies.get(label);
+        if (f != null && !f.isHertz()) {
+            return "sinusoid " + f.display();
+        }
+        String at = steps.get(label);
+        if (at != null) {
+            return "step at " + at;
+        }
+        return label;
+    }
+
+    /** How reports name harmonic {@code k} of the series {@code label} with fundamental {@code f0Hz}. */
+    String harmonicName(String label, double f0Hz, int k) {
+        Frequency f0 = fundamentals.get(label);
+        String base = f0 != null && !f0.isHertz() ? f0.display() : Frequency.number(f0Hz) + " Hz";
+        return "harmonic " + k + " of " + base;
     }
 
     /** The user's figure for harmonic {@code k} of series {@code label}, or of sinusoid {@code label} when k is 0. */
@@ -41,6 +68,7 @@ record ModelPlan(ModelSpec spec, Map<String, Frequency> frequencies, Map<String,
         private ModelSpec spec;
         private final Map<String, Frequency> frequencies = new LinkedHashMap<>();
         private final Map<String, Frequency> fundamentals = new LinkedHashMap<>();
+        private final Map<String, String> steps = new LinkedHashMap<>();
 
         Builder spec(ModelSpec s) {
             this.spec = s;
@@ -57,8 +85,13 @@ record ModelPlan(ModelSpec spec, Map<String, Frequency> frequencies, Map<String,
             return this;
         }
 
+        Builder step(String label, String asWritten) {
+            steps.put(label, asWritten);
+            return this;
+        }
+
         ModelPlan build() {
-            return new ModelPlan(spec, frequencies, fundamentals);
+            return new ModelPlan(spec, frequencies, fundamentals, steps);
         }
     }
 }

@@ -38,7 +38,7 @@ final class Numbers {
             return v > 0 ? "inf" : "-inf";
         }
         double a = Math.abs(v);
-        if (a != 0 && (a < 1e-3 || a >= 1e7)) {
+        if (a != 0 && (a < 1e-4 || a >= 1e6)) {
             return String.format(Locale.ROOT, "%.3e", v);
         }
         return Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v)));
@@ -55,6 +55,27 @@ final class Numbers {
             return String.format(Locale.ROOT, "%.1e", p);
         }
         return String.format(Locale.ROOT, "%.4f", p);
+    }
+
+    /** "= 0.0123" or "< 1e-16", for p-values inside sentences. */
+    static String pRelation(double p) {
+        String s = pValue(p);
+        return s.startsWith("<") ? "< " + s.substring(1) : "= " + s;
+    }
+
+    /** A record length in seconds, with minutes, hours or days beside it when long. */
+    static String duration(double seconds) {
+        String s = sig(seconds) + " s";
+        if (seconds >= 2 * 86400) {
+            return s + " (" + Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", seconds / 86400))) + " days)";
+        }
+        if (seconds >= 2 * 3600) {
+            return s + " (" + Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", seconds / 3600))) + " h)";
+        }
+        if (seconds >= 120) {
+            return s + " (" + Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", seconds / 60))) + " min)";
+        }
+        return s;
     }
 
     static String percent(double share) {

@@ -48,11 +48,6 @@ final class Progress implements AutoCloseable {
         return new Progress(task, total, !quiet && System.console() != null);
     }
 
-    /** A display that never shows; for callers that run inside another display. */
-    static Progress silent() {
-        return new Progress("", 0, false);
-    }
-
     /** One step done; {@code what} describes the step just finished (a file name, a stage). */
     synchronized void step(String what) {
         done++;
@@ -60,6 +55,14 @@ final class Progress implements AutoCloseable {
         if (bar != null) {
             bar.stepTo(done);
             bar.setExtraMessage(detail);
+        }
+    }
+
+    /** Progress reached {@code count} steps (for work measured in bytes or per mille, not in items). */
+    synchronized void at(long count) {
+        done = Math.max(done, Math.min(total, count));
+        if (bar != null) {
+            bar.stepTo(done);
         }
     }
 

@@ -10,6 +10,17 @@ import java.util.List;
  * @param channel     channel counting from 1, or null for the first
  * @param rateHz      sample rate for files without times, or null
  * @param covariates  further columns to read as covariates
+ * @param allColumns  read every further numeric column as a covariate (for surveys); then
+ *                    {@code covariates} is ignored
  */
-record RecordRequest(String timeColumn, String valueColumn, Integer channel, Double rateHz, List<String> covariates) {
+record RecordRequest(String timeColumn, String valueColumn, Integer channel, Double rateHz, List<String> covariates,
+                     boolean allColumns) {
+    RecordRequest {
+        covariates = List.copyOf(covariates);
+    }
+
+    /** The same request, reading every numeric column. */
+    RecordRequest everyColumn() {
+        return new RecordRequest(timeColumn, valueColumn, channel, rateHz, List.of(), true);
+    }
 }

@@ -139,15 +139,17 @@ final class TermOptions {
             for (TimePoint t : steps) {
                 double at = t.secondsIn(series, where);
                 if (series.size() > 0 && (at <= series.startTime() || at > series.endTime())) {
-                    throw new InputException("the step at " + t.text() + " lies outside the record " + where
+                    throw new InputProblem("the step at " + t.text() + " lies outside the record " + where
                             + " (" + Frequency.number(series.startTime()) + " s to " + Frequency.number(series.endTime())
                             + " s from its time zero)");
                 }
-                terms.add(new Step(at));
+                Step step = new Step(at);
+                terms.add(step);
+                plan.step(step.label(), t.text());
             }
             for (String c : covariates) {
                 if (!series.hasCovariate(c)) {
-                    throw new InputException(where + " has no column '" + c + "' to use as a covariate");
+                    throw new InputProblem(where + " has no column '" + c + "' to use as a covariate");
                 }
                 terms.add(new Covariate(c));
             }

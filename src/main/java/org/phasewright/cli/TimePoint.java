@@ -54,7 +54,7 @@ record TimePoint(String text, double seconds, Instant instant) {
         if (instant == null) {
             return seconds;
         }
-        Instant origin = series.origin().orElseThrow(() -> new InputException(where
+        Instant origin = series.origin().orElseThrow(() -> new InputProblem(where
                 + " has no timestamps, so " + text + " cannot be placed on its time axis; give the time in seconds"
                 + " from the start instead"));
         double s = (instant.getEpochSecond() - origin.getEpochSecond()) + (instant.getNano() - origin.getNano()) * 1e-9;

@@ -30,10 +30,10 @@ public final class GreenhouseTemperature implements DemoScenario {
     private static final long SEED = 4104L;
 
     private static final List<TrueSinusoid> TRUTH = List.of(
-            new TrueSinusoid("daily cycle", 1 / DAY_S, 3.40, 200.0),
+            new TrueSinusoid("daily cycle", 1 / DAY_S, 3.40, -160.0),
             new TrueSinusoid("daily 2nd harmonic", 2 / DAY_S, 0.90, 40.0));
     private static final List<TrueSinusoid> OUTSIDE_DAILY = List.of(
-            new TrueSinusoid("outside daily", 1 / DAY_S, 5.5, 225.0));
+            new TrueSinusoid("outside daily", 1 / DAY_S, 5.5, -135.0));
 
     @Override
     public String fileName() {

@@ -31,8 +31,8 @@ public final class HarbourLevel implements DemoScenario {
             new TrueSinusoid("M2", Waves.degreesPerHourToHz(28.9841042), 1.180, 112.0),
             new TrueSinusoid("S2", Waves.degreesPerHourToHz(30.0), 0.410, 146.0),
             new TrueSinusoid("N2", Waves.degreesPerHourToHz(28.4397295), 0.240, 87.0),
-            new TrueSinusoid("K1", Waves.degreesPerHourToHz(15.0410686), 0.350, 231.0),
-            new TrueSinusoid("O1", Waves.degreesPerHourToHz(13.9430356), 0.260, 205.0));
+            new TrueSinusoid("K1", Waves.degreesPerHourToHz(15.0410686), 0.350, -129.0),
+            new TrueSinusoid("O1", Waves.degreesPerHourToHz(13.9430356), 0.260, -155.0));
 
     @Override
     public String fileName() {

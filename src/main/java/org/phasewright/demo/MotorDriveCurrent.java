@@ -25,7 +25,7 @@ public final class MotorDriveCurrent implements DemoScenario {
             new TrueSinusoid("2nd harmonic", 120, 0, 0),
             new TrueSinusoid("3rd harmonic", 180, 0, 0),
             new TrueSinusoid("4th harmonic", 240, 0, 0),
-            new TrueSinusoid("5th harmonic", 300, 0.850, 200.0),
+            new TrueSinusoid("5th harmonic", 300, 0.850, -160.0),
             new TrueSinusoid("6th harmonic", 360, 0, 0),
             new TrueSinusoid("7th harmonic", 420, 0.520, 75.0));
 

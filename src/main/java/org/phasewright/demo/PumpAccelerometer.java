@@ -27,7 +27,7 @@ public final class PumpAccelerometer implements DemoScenario {
     private static final List<TrueSinusoid> TRUTH = List.of(
             new TrueSinusoid("shaft 1x", SHAFT_HZ, 0.420, 40.0),
             new TrueSinusoid("shaft 2x", 2 * SHAFT_HZ, 0.180, 115.0),
-            new TrueSinusoid("shaft 3x", 3 * SHAFT_HZ, 0.070, 290.0),
+            new TrueSinusoid("shaft 3x", 3 * SHAFT_HZ, 0.070, -70.0),
             new TrueSinusoid("vane pass 7x", 7 * SHAFT_HZ, 0.250, 160.0));
 
     @Override

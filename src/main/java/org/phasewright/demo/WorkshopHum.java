@@ -28,9 +28,9 @@ public final class WorkshopHum implements DemoScenario {
 
     private static final List<TrueSinusoid> HUM = List.of(
             new TrueSinusoid("hum 50 Hz", 50, 0.060, 20.0),
-            new TrueSinusoid("hum 150 Hz", 150, 0.025, 200.0),
+            new TrueSinusoid("hum 150 Hz", 150, 0.025, -160.0),
             new TrueSinusoid("hum 250 Hz", 250, 0.012, 75.0),
-            new TrueSinusoid("hum 350 Hz", 350, 0.006, 310.0));
+            new TrueSinusoid("hum 350 Hz", 350, 0.006, -50.0));
     private static final List<TrueSinusoid> TONE = List.of(
             new TrueSinusoid("note A4", 440, 0.300, 0.0),
             new TrueSinusoid("note 2nd partial", 880, 0.080, 95.0));

@@ -56,7 +56,7 @@ class FrequencyParserTest {
         assertThat(FrequencyParser.parse("2/day").times(3).display()).isEqualTo("6 /day");
         assertThat(FrequencyParser.parse("period:12h").times(2).display()).isEqualTo("period 6 h");
         assertThat(FrequencyParser.parse("period:12h").times(2).hertz()).isCloseTo(1 / 21600.0, within(1e-18));
-        assertThat(FrequencyParser.parse("28.9841042deg/h").display()).isEqualTo("28.984104 deg/h");
+        assertThat(FrequencyParser.parse("28.9841042deg/h").display()).isEqualTo("28.9841042 deg/h");
         assertThat(FrequencyParser.parse("50").isHertz()).isTrue();
         assertThat(FrequencyParser.parse("1485rpm").isHertz()).isFalse();
     }

@@ -34,7 +34,7 @@ class ValueSyntaxTest {
         assertThat(TimePoint.parse("2026-04-14T06:00:30Z").secondsIn(s, "f.csv")).isEqualTo(90);
         Series bare = Series.at(new double[] {0, 1}, new double[] {1, 2});
         assertThatThrownBy(() -> TimePoint.parse("2026-04-14T06:00:30Z").secondsIn(bare, "f.csv"))
-                .isInstanceOf(InputException.class).hasMessageContaining("f.csv has no timestamps");
+                .isInstanceOf(InputProblem.class).hasMessageContaining("f.csv has no timestamps");
     }
 
     @Test

@@ -5,12 +5,12 @@ package org.phasewright.cli;
  * not there, a time outside the record): exit code 3. The message is one sentence that names the
  * place.
  */
-final class InputException extends RuntimeException {
-    InputException(String message) {
+final class InputProblem extends RuntimeException {
+    InputProblem(String message) {
         super(message);
     }
 
-    InputException(String message, Throwable cause) {
+    InputProblem(String message, Throwable cause) {
         super(message, cause);
     }
 }
