@@ -132,7 +132,7 @@ final class FitCommand implements Callable<Integer> {
             progress.at(1000);
         }
         if (json) {
-            FitOutputs.printJson(out, f.result());
+            FitOutputs.printJson(out, f.record(), f.result());
         } else {
             FitReport.print(out, f.record().where(), f.record().series(), f.record().unit(), f.plan(), f.result());
             if (outDir != null) {

@@ -24,7 +24,7 @@ final class FitOutputs {
         throw new IllegalStateException("the io writers are not merged yet");
     }
 
-    static void printJson(PrintWriter out, FitResult result) {
+    static void printJson(PrintWriter out, LoadedRecord record, FitResult result) {
         throw new IllegalStateException("the io writers are not merged yet");
     }
 }

@@ -14,9 +14,11 @@ import org.phasewright.series.Series;
  * @param series    the signal, with the requested covariates attached
  * @param unit      the signal's unit as the file states it ("" when it does not)
  * @param sampling  how the reader found the samples spaced, when it examined timestamps (else null)
+ * @param timeOffsetSeconds seconds the reader subtracted from numeric times so that t = 0 is the
+ *                  first sample (0 when none)
  */
 record LoadedRecord(String where, String format, List<String> channels, String channel, Series series,
-                    String unit, SamplingSummary sampling) {
+                    String unit, SamplingSummary sampling, double timeOffsetSeconds) {
     LoadedRecord {
         channels = List.copyOf(channels);
     }

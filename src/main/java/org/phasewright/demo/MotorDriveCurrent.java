@@ -41,7 +41,7 @@ public final class MotorDriveCurrent implements DemoScenario {
 
     @Override
     public List<TrueScalar> scalars() {
-        return List.of();
+        return List.of(new TrueScalar("clamp offset", "intercept", OFFSET_A));
     }
 
     @Override

@@ -49,7 +49,7 @@ public final class WorkshopHum implements DemoScenario {
 
     @Override
     public List<TrueScalar> scalars() {
-        return List.of();
+        return List.of(new TrueScalar("offset", "intercept", 0.0));
     }
 
     @Override
