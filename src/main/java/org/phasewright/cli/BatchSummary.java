@@ -93,15 +93,16 @@ final class BatchSummary {
 
     void write(Writer w) throws IOException {
         CSVFormat format = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
-        try (CSVPrinter p = new CSVPrinter(w, format)) {
-            p.printRecord(columns);
-            for (Map<String, String> row : rows) {
-                List<String> cells = new ArrayList<>();
-                for (String c : columns) {
-                    cells.add(row.getOrDefault(c, ""));
-                }
-                p.printRecord(cells);
+        // not closed here: the caller owns the writer (an atomic file, or standard output)
+        CSVPrinter p = new CSVPrinter(w, format);
+        p.printRecord(columns);
+        for (Map<String, String> row : rows) {
+            List<String> cells = new ArrayList<>();
+            for (String c : columns) {
+                cells.add(row.getOrDefault(c, ""));
             }
+            p.printRecord(cells);
         }
+        p.flush();
     }
 }

@@ -190,12 +190,12 @@ final class SurveyCommand implements Callable<Integer> {
         FundamentalCandidate c = result.fundamental().get();
         List<Integer> ks = c.harmonicNumbers();
         int highest = ks.stream().mapToInt(Integer::intValue).max().orElse(1);
-        long kept = ks.size();
-        if (c.explainedPowerFraction() < 0.5 || 2 * kept < highest) {
+        boolean fundamentalSeen = ks.contains(1);
+        if (c.explainedPowerFraction() < 0.5 || !fundamentalSeen) {
             out.println("The best common fundamental, " + Numbers.hertz(round(c.frequencyHz())) + " Hz"
                     + inUnit(c.frequencyHz()) + ", explains " + Numbers.percent(c.explainedPowerFraction())
-                    + " % of the peaks' power with harmonics " + join(c.harmonicNumbers()) + (c.explainedPowerFraction() < 0.5
-                    ? "" : ", a sparse set among 1.." + highest) + "; the peaks look like separate tones.");
+                    + " % of the peaks' power with harmonics " + join(c.harmonicNumbers()) + (fundamentalSeen
+                    ? "" : ", though no peak lies at the fundamental itself") + "; the peaks look like separate tones.");
             out.println("To fit the strongest peaks:");
             out.println("  phasewright fit " + r.where() + freqOptions(list));
             return;
