@@ -1,0 +1,94 @@
+package org.phasewright.io.read;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.phasewright.io.read.WavFixtureGenerator.FRAMES;
+import static org.phasewright.io.read.WavFixtureGenerator.code;
+import static org.phasewright.io.read.WavFixtureGenerator.floatValue;
+
+import java.nio.file.Path;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.api.Test;
+import org.phasewright.io.BadInputCatalogueTest;
+import org.phasewright.io.WavEncoding;
+
+/**
+ * Reads the committed WAV fixtures (written by the JDK, see io/README.md) and checks every
+ * decoded sample against the integer codes the generator wrote, scaled by 2^-(bits-1) to full
+ * scale (common practice for PCM).
+ */
+class WavReaderTest {
+
+    private static Path fixture(String name) {
+        return BadInputCatalogueTest.resource("io/wav/" + name);
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({
+        "tone-pcm8-mono.wav, PCM_UNSIGNED, 8, 1",
+        "tone-pcm16-stereo.wav, PCM_SIGNED, 16, 2",
+        "tone-pcm24-mono.wav, PCM_SIGNED, 24, 1",
+        "tone-pcm32-mono.wav, PCM_SIGNED, 32, 1",
+        "tone-extensible-pcm24-stereo.wav, PCM_SIGNED, 24, 2",
+    })
+    void integerFixturesDecodeToScaledCodes(String name, WavEncoding encoding, int bits, int channels) {
+        for (int ch = 1; ch <= channels; ch++) {
+            WavData d = WavReader.read(fixture(name), WavReadOptions.channel(ch));
+            WavInfo info = d.info();
+            assertThat(info.encoding()).isEqualTo(encoding);
+            assertThat(info.bitsPerSample()).isEqualTo(bits);
+            assertThat(info.channels()).isEqualTo(channels);
+            assertThat(info.sampleRateHz()).isEqualTo(8000);
+            assertThat(info.frames()).isEqualTo(FRAMES);
+            assertThat(d.series().rate()).hasValue(8000);
+            double scale = Math.scalb(1.0, -(bits - 1));
+            for (int i = 0; i < FRAMES; i++) {
+                assertThat(d.series().valueAt(i)).as("frame %d channel %d", i, ch).isEqualTo(code(i, ch - 1, bits) * scale);
+            }
+            assertThat(d.series().valueAt(5)).isEqualTo(-1.0);
+            assertThat(d.series().valueAt(6)).isLessThan(1.0);
+            assertThat(d.overFullScale()).isZero();
+        }
+    }
+
+    @Test
+    void averagingTakesTheMeanOfTheChannels() {
+        WavData d = WavReader.read(fixture("tone-pcm16-stereo.wav"), WavReadOptions.averageChannels());
+        double scale = Math.scalb(1.0, -15);
+        for (int i = 0; i < FRAMES; i++) {
+            assertThat(d.series().valueAt(i)).isEqualTo((code(i, 0, 16) * scale + code(i, 1, 16) * scale) / 2);
+        }
+        assertThat(d.info().selection()).isEqualTo("mean of 2 channels");
+        assertThat(d.series().name()).isEqualTo("tone-pcm16-stereo mean");
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource({"tone-float32-stereo.wav, 2", "tone-extensible-float32-mono.wav, 1"})
+    void floatFixturesPassThrough(String name, int channels) {
+        WavData d = WavReader.read(fixture(name), WavReadOptions.channel(channels));
+        assertThat(d.info().encoding()).isEqualTo(WavEncoding.PCM_FLOAT);
+        assertThat(d.info().bitsPerSample()).isEqualTo(32);
+        for (int i = 0; i < FRAMES; i++) {
+            assertThat(d.series().valueAt(i)).isEqualTo((double) floatValue(i, channels - 1));
+        }
+    }
+
+    @Test
+    void blockReaderDeliversTheSameSamplesInSmallBlocks() {
+        double[] whole = WavReader.read(fixture("tone-pcm24-mono.wav")).series().values();
+        try (WavBlockReader r = WavBlockReader.open(fixture("tone-pcm24-mono.wav"))) {
+            double[] block = new double[7];
+            int at = 0;
+            int n;
+            while ((n = r.read(block)) > 0) {
+                for (int k = 0; k < n; k++) {
+                    assertThat(block[k]).isEqualTo(whole[at + k]);
+                }
+                at += n;
+            }
+            assertThat(at).isEqualTo(FRAMES);
+            assertThat(r.framesRead()).isEqualTo(FRAMES);
+            assertThat(r.read(block)).isEqualTo(-1);
+        }
+    }
+}
