@@ -9,7 +9,7 @@ import java.nio.file.Path;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.api.Test;
-import org.phasewright.io.BadInputCatalogueTest;
+import org.phasewright.io.TestResources;
 import org.phasewright.io.WavEncoding;
 
 /**
@@ -20,7 +20,7 @@ import org.phasewright.io.WavEncoding;
 class WavReaderTest {
 
     private static Path fixture(String name) {
-        return BadInputCatalogueTest.resource("io/wav/" + name);
+        return TestResources.path("io/wav/" + name);
     }
 
     @ParameterizedTest(name = "{0}")
