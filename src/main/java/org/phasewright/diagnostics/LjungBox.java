@@ -1,0 +1,12 @@
+package org.phasewright.diagnostics;
+
+/**
+ * Ljung-Box portmanteau test of residual autocorrelation.
+ *
+ * @param statistic Q = n (n + 2) sum_{k=1..h} r_k^2 / (n - k)
+ * @param lags      h
+ * @param dof       degrees of freedom of the chi-square reference (h minus fitted ARMA parameters, here h)
+ * @param pValue    P(chi^2_dof >= Q)
+ */
+public record LjungBox(double statistic, int lags, int dof, double pValue) {
+}

@@ -1,0 +1,193 @@
+package org.phasewright.spectrum;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+
+/**
+ * Finds the peaks of an amplitude {@link Spectrum}.
+ *
+ * <p>Method: (1) the local noise level at each grid point is the median of the grid amplitudes
+ * within +-{@code noiseHalfWidthBins} resolution bins, divided by sqrt(ln 2): for a noise-only
+ * spectrum each grid amplitude is Rayleigh distributed, whose median is sqrt(ln 2) times its RMS
+ * (common practice; the median ignores the few bins occupied by tones). Medians are taken at
+ * centres a quarter band apart and interpolated linearly. (2) Local maxima above the SNR threshold
+ * are candidates, except within the window's main-lobe half-width of the first grid frequency (there
+ * the leakage of the mean or of a trend dominates); each gets an interpolated frequency ({@link Periodogram#interpolatePeak}), polished
+ * by a golden-section maximisation of the {@link ToneProbe} amplitude within half a grid step, and
+ * the amplitude read there by the probe. (3) Candidates are taken strongest first; one is
+ * dropped when its amplitude is within {@code leakageMarginDb} of the leakage predicted from the
+ * peaks already kept, {@code sum_s A_s (R(f - f_s) + R(f + f_s))} with R the window's normalised
+ * response (FFT) or the spectral window of the sampling (Lomb-Scargle) — this removes side lobes
+ * and sampling aliases.
+ *
+ * <p>Cost: O(K log B) for the noise level (K grid points, B band points), O(n) per candidate for
+ * the probe and O(n) per candidate pair for the spectral window of uneven data.
+ */
+public final class PeakFinder {
+
+    private static final int MAX_CANDIDATES = 200;
+
+    private PeakFinder() {
+    }
+
+    /**
+     * Peaks of a spectrum, strongest first.
+     *
+     * @param response normalised leakage response as a function of the offset in hertz
+     *                 (see {@link #windowResponse(Spectrum)} and {@link LombScargle#spectralWindow})
+     */
+    public static List<Peak> find(Spectrum spectrum, ToneProbe probe, DoubleUnaryOperator response, PeakOptions options) {
+        return find(spectrum, probe, probe, response, options);
+    }
+
+    /**
+     * As {@link #find(Spectrum, ToneProbe, DoubleUnaryOperator, PeakOptions)}, locating each peak with
+     * {@code frequencyProbe} and reading its amplitude with {@code amplitudeProbe} (a flat-top spectrum
+     * reads amplitudes well but its rippled main lobe locates tones poorly, so its peaks are located
+     * with a Hann probe).
+     */
+    public static List<Peak> find(Spectrum spectrum, ToneProbe amplitudeProbe, ToneProbe frequencyProbe,
+                                  DoubleUnaryOperator response, PeakOptions options) {
+        ToneProbe probe = amplitudeProbe;
+        double[] noise = noiseLevel(spectrum, options.noiseHalfWidthBins());
+        int k = spectrum.size();
+        List<Peak> candidates = new ArrayList<>();
+        double minRatio = Math.pow(10, options.minSnrDb() / 20);
+        double lowest = spectrum.frequencyAt(0) + spectrum.resolutionHz() * spectrum.window().mainLobeHalfWidthBins();
+        for (int j = 1; j < k; j++) {
+            if (spectrum.frequencyAt(j) < lowest) {
+                continue;
+            }
+            double a = spectrum.amplitudeAt(j);
+            boolean left = a > spectrum.amplitudeAt(j - 1);
+            boolean right = j == k - 1 || a >= spectrum.amplitudeAt(j + 1);
+            if (left && right && noise[j] > 0 && a >= minRatio * noise[j]) {
+                candidates.add(new Peak(spectrum.frequencyAt(j), a, 0, noise[j], j));
+            }
+        }
+        candidates.sort(Comparator.comparingDouble(Peak::amplitude).reversed());
+        if (candidates.size() > MAX_CANDIDATES) {
+            candidates = new ArrayList<>(candidates.subList(0, MAX_CANDIDATES));
+        }
+        List<Peak> refined = new ArrayList<>();
+        for (Peak c : candidates) {
+            double f = polish(spectrum, frequencyProbe, Periodogram.interpolatePeak(spectrum, c.gridIndex()));
+            double amp = Math.max(probe.amplitudeAt(f), c.amplitude());
+            double snr = 20 * Math.log10(amp / c.noiseAmplitude());
+            refined.add(new Peak(f, amp, snr, c.noiseAmplitude(), c.gridIndex()));
+        }
+        refined.sort(Comparator.comparingDouble(Peak::amplitude).reversed());
+        double margin = Math.pow(10, options.leakageMarginDb() / 20);
+        List<Peak> kept = new ArrayList<>();
+        for (Peak c : refined) {
+            if (c.snrDb() < options.minSnrDb()) {
+                continue;
+            }
+            double leak = 0;
+            boolean duplicate = false;
+            for (Peak s : kept) {
+                if (Math.abs(c.frequencyHz() - s.frequencyHz()) < 0.5 * spectrum.resolutionHz()) {
+                    duplicate = true;
+                    break;
+                }
+                leak += s.amplitude() * (response.applyAsDouble(c.frequencyHz() - s.frequencyHz())
+                        + response.applyAsDouble(c.frequencyHz() + s.frequencyHz()));
+            }
+            if (!duplicate && c.amplitude() > margin * leak) {
+                kept.add(c);
+                if (kept.size() == options.maxPeaks()) {
+                    break;
+                }
+            }
+        }
+        return List.copyOf(kept);
+    }
+
+    /**
+     * Maximises the probe amplitude by golden-section search within half a resolution bin (or half a
+     * grid step, if larger) either side of the interpolated frequency (32 probe evaluations,
+     * tolerance about 1e-7 of the bracket). For a single
+     * tone this is the maximum of the windowed DTFT, which removes the bias of the log-parabola.
+     */
+    static double polish(Spectrum s, ToneProbe probe, double f) {
+        double half = 0.5 * Math.max(s.gridStepHz(), s.resolutionHz());
+        double lo = Math.max(s.frequencyAt(0), f - half);
+        double hi = Math.min(s.frequencyAt(s.size() - 1), f + half);
+        double g = (Math.sqrt(5) - 1) / 2;
+        double x1 = hi - g * (hi - lo);
+        double x2 = lo + g * (hi - lo);
+        double v1 = probe.amplitudeAt(x1);
+        double v2 = probe.amplitudeAt(x2);
+        for (int it = 0; it < 32; it++) {
+            if (v1 < v2) {
+                lo = x1;
+                x1 = x2;
+                v1 = v2;
+                x2 = lo + g * (hi - lo);
+                v2 = probe.amplitudeAt(x2);
+            } else {
+                hi = x2;
+                x2 = x1;
+                v2 = v1;
+                x1 = hi - g * (hi - lo);
+                v1 = probe.amplitudeAt(x1);
+            }
+        }
+        double best = 0.5 * (lo + hi);
+        return probe.amplitudeAt(best) >= probe.amplitudeAt(f) ? best : f;
+    }
+
+    /** The window's normalised response for an FFT spectrum, as a function of the offset in hertz. */
+    public static DoubleUnaryOperator windowResponse(Spectrum spectrum) {
+        Window w = spectrum.window();
+        int n = spectrum.samples();
+        double res = spectrum.resolutionHz();
+        return offsetHz -> w.response(offsetHz / res, n);
+    }
+
+    /** Local RMS noise amplitude at each grid point (median / sqrt(ln 2) over a band). */
+    static double[] noiseLevel(Spectrum s, double halfWidthBins) {
+        int k = s.size();
+        int half = (int) Math.max(2, Math.round(halfWidthBins * s.resolutionHz() / s.gridStepHz()));
+        int stride = Math.max(1, half / 4);
+        int centres = (k - 1) / stride + 1;
+        double[] at = new double[centres];
+        double[] med = new double[centres];
+        double[] buf = new double[2 * half + 1];
+        double scale = 1 / Math.sqrt(Math.log(2));
+        for (int c = 0; c < centres; c++) {
+            int centre = Math.min(k - 1, c * stride);
+            int lo = Math.max(0, centre - half);
+            int hi = Math.min(k - 1, centre + half);
+            if (hi - lo < 2 * half) {
+                if (lo == 0) {
+                    hi = Math.min(k - 1, 2 * half);
+                } else {
+                    lo = Math.max(0, k - 1 - 2 * half);
+                }
+            }
+            int m = hi - lo + 1;
+            for (int j = 0; j < m; j++) {
+                buf[j] = s.amplitudeAt(lo + j);
+            }
+            Arrays.sort(buf, 0, m);
+            double median = m % 2 == 1 ? buf[m / 2] : 0.5 * (buf[m / 2 - 1] + buf[m / 2]);
+            at[c] = centre;
+            med[c] = median * scale;
+        }
+        double[] out = new double[k];
+        for (int j = 0; j < k; j++) {
+            int c = Math.min(centres - 1, j / stride);
+            if (c == centres - 1 || at[c] == j) {
+                out[j] = med[c];
+            } else {
+                double u = (j - at[c]) / (at[c + 1] - at[c]);
+                out[j] = med[c] + u * (med[c + 1] - med[c]);
+            }
+        }
+        return out;
+    }
+}
