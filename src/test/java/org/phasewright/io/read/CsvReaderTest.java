@@ -236,6 +236,20 @@ class CsvReaderTest {
     }
 
     @Test
+    void windowsLineEndsAndLineNumbersAfterCommentsAndBlanks() throws IOException {
+        Path p = file("crlf.csv", "# exported\r\ntime,x\r\n0,1\r\n\r\n# pause\r\n1,2\r\n2,oops\r\n");
+        assertThatThrownBy(() -> CsvReader.read(p))
+                .isInstanceOfSatisfying(InputException.class, e -> {
+                    assertThat(e.line()).hasValue(7);
+                    assertThat(e.column()).hasValue(2);
+                    assertThat(e.columnName()).contains("x");
+                })
+                .hasMessageEndingWith("crlf.csv, line 7, column 2 (x): 'oops' is not a number");
+        Path ok = file("crlf-ok.csv", "time,x\r\n0,1\r\n1,2\r\n");
+        assertThat(CsvReader.read(ok).series().values()).containsExactly(1, 2);
+    }
+
+    @Test
     void numberCellsAreStrict() throws Exception {
         assertThat(NumberCells.parse("-1.5e-3", false)).isEqualTo(-1.5e-3);
         assertThat(NumberCells.parse(".5", false)).isEqualTo(0.5);
