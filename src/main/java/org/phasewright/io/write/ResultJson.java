@@ -13,6 +13,9 @@ import org.phasewright.fit.FitResult;
 import org.phasewright.fit.FitWarning;
 import org.phasewright.io.ModelFile;
 import org.phasewright.io.SoftwareVersion;
+import org.phasewright.io.read.CsvSummary;
+import org.phasewright.io.read.SamplingSummary;
+import org.phasewright.io.read.WavInfo;
 import org.phasewright.model.GroupReport;
 import org.phasewright.model.HarmonicSeriesReport;
 import org.phasewright.model.ScalarReport;
@@ -28,7 +31,7 @@ import org.phasewright.series.Series;
  *
  * <p>Top-level fields: {@code format}, {@code format_version}, {@code software} {name, version},
  * {@code data} (source, name, unit, n_samples, n_observed, n_missing, longest_gap, sampling
- * "uniform"/"uneven", rate_hz, start_s, end_s, duration_s, time_origin, time_offset_s),
+ * "uniform"/"uneven", rate_hz, start_s, end_s, duration_s, time_origin, time_offset_s, covariates, and when known sampling_check and wav),
  * {@code model} {terms in the model-file layout}, {@code level}, {@code n}, {@code p},
  * {@code dof}, {@code residual_sd}, {@code rss}, {@code r_squared}, {@code r_squared_centred},
  * {@code adjusted_r_squared}, {@code overall_f}, {@code overall_df1}, {@code overall_df2},
@@ -57,6 +60,8 @@ public final class ResultJson {
     private final Series data;
     private String source;
     private double timeOffsetSeconds;
+    private SamplingSummary sampling;
+    private WavInfo wav;
 
     private ResultJson(FitResult fit, Series data) {
         this.fit = Objects.requireNonNull(fit, "fit");
@@ -78,6 +83,23 @@ public final class ResultJson {
     public ResultJson timeOffsetSeconds(double seconds) {
         this.timeOffsetSeconds = seconds;
         return this;
+    }
+
+    /** Adds the reader's sampling check (step statistics, jitter, time gaps) to the data summary. */
+    public ResultJson sampling(SamplingSummary check) {
+        this.sampling = check;
+        return this;
+    }
+
+    /** Takes source, time offset and sampling check from a CSV reader's summary. */
+    public ResultJson readBy(CsvSummary summary) {
+        return source(summary.file().toString()).timeOffsetSeconds(summary.timeOffsetSeconds()).sampling(summary.sampling());
+    }
+
+    /** Takes the source and the sample format from a WAV reader's header information. */
+    public ResultJson readBy(WavInfo info) {
+        this.wav = info;
+        return source(info.file().toString());
     }
 
     /** The document as text, ending in a newline (what {@code --json} prints). */
@@ -175,6 +197,25 @@ public final class ResultJson {
         }
         num(d, "time_offset_s", timeOffsetSeconds);
         d.putArray("covariates").addAll(data.covariateNames().stream().map(NODES::textNode).toList());
+        if (sampling != null) {
+            ObjectNode c = d.putObject("sampling_check");
+            num(c, "tolerance_steps", sampling.tolerance());
+            num(c, "mean_step_s", sampling.meanStepSeconds());
+            num(c, "median_step_s", sampling.medianStepSeconds());
+            num(c, "min_step_s", sampling.minStepSeconds());
+            num(c, "max_step_s", sampling.maxStepSeconds());
+            num(c, "jitter_rms_s", sampling.jitterRmsSeconds());
+            num(c, "jitter_max_s", sampling.jitterMaxSeconds());
+            c.put("time_gaps", sampling.timeGaps());
+        }
+        if (wav != null) {
+            ObjectNode w = d.putObject("wav");
+            w.put("encoding", wav.encoding().name().toLowerCase(java.util.Locale.ROOT));
+            w.put("bits_per_sample", wav.bitsPerSample());
+            w.put("channels", wav.channels());
+            w.put("selection", wav.selection());
+            num(w, "sample_rate_hz", wav.sampleRateHz());
+        }
         return d;
     }
 

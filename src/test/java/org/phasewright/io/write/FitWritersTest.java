@@ -148,6 +148,25 @@ class FitWritersTest {
     }
 
     @Test
+    void readerSummariesAddSourceOffsetAndSamplingCheck() throws IOException {
+        Path csv = dir.resolve("fan.csv");
+        CleanedSignalWriter.writeCsv(csv, data, false);
+        CsvData read = CsvReader.read(csv);
+        JsonNode d = new ObjectMapper().readTree(ResultJson.of(fit, read.series()).readBy(read.summary()).toJsonString()).get("data");
+        assertThat(d.get("source").asText()).isEqualTo(csv.toString());
+        assertThat(d.get("sampling_check").get("time_gaps").asInt()).isZero();
+        assertThat(d.get("sampling_check").get("tolerance_steps").asDouble()).isEqualTo(0.01);
+        assertThat(d.get("time_offset_s").asDouble()).isZero();
+        Path wav = dir.resolve("fan.wav");
+        Series scaled = data.withValues(java.util.Arrays.stream(data.values()).map(x -> x / 10).toArray());
+        CleanedSignalWriter.writeWav(wav, scaled, org.phasewright.io.WavSampleFormat.pcm16(100), false);
+        org.phasewright.io.read.WavData w = org.phasewright.io.read.WavReader.read(wav);
+        JsonNode wd = new ObjectMapper().readTree(ResultJson.of(fit, w.series()).readBy(w.info()).toJsonString()).get("data");
+        assertThat(wd.get("wav").get("bits_per_sample").asInt()).isEqualTo(16);
+        assertThat(wd.get("wav").get("encoding").asText()).isEqualTo("pcm_signed");
+    }
+
+    @Test
     void exactFitWritesNullForUndefinedNumbers() throws IOException {
         double[] v = new double[16];
         for (int i = 0; i < v.length; i++) {
