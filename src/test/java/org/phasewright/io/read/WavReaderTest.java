@@ -74,6 +74,27 @@ class WavReaderTest {
     }
 
     @Test
+    void otherAudioFormatsTheJdkKnowsAreRefused(@org.junit.jupiter.api.io.TempDir Path dir) throws Exception {
+        javax.sound.sampled.AudioFormat f = new javax.sound.sampled.AudioFormat(8000, 16, 1, true, true);
+        Path au = dir.resolve("tone.au");
+        try (javax.sound.sampled.AudioInputStream ais = new javax.sound.sampled.AudioInputStream(
+                new java.io.ByteArrayInputStream(new byte[200]), f, 100)) {
+            javax.sound.sampled.AudioSystem.write(ais, javax.sound.sampled.AudioFileFormat.Type.AU, au.toFile());
+        }
+        org.assertj.core.api.Assertions.assertThatThrownBy(() -> WavReader.read(au))
+                .isInstanceOfSatisfying(org.phasewright.io.InputException.class,
+                        e -> assertThat(e.kind()).isEqualTo(org.phasewright.io.InputException.Kind.UNSUPPORTED_AUDIO))
+                .hasMessageContaining("not a WAV file");
+    }
+
+    @Test
+    void progressCountsFrames() {
+        java.util.List<Long> frames = new java.util.ArrayList<>();
+        WavReader.read(fixture("tone-pcm16-stereo.wav"), WavReadOptions.channel(2).withProgress((b, t, n) -> frames.add(n)));
+        assertThat(frames).last().isEqualTo((long) FRAMES);
+    }
+
+    @Test
     void blockReaderDeliversTheSameSamplesInSmallBlocks() {
         double[] whole = WavReader.read(fixture("tone-pcm24-mono.wav")).series().values();
         try (WavBlockReader r = WavBlockReader.open(fixture("tone-pcm24-mono.wav"))) {
