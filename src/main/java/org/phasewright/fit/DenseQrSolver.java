@@ -18,8 +18,8 @@ import org.phasewright.series.Series;
  * {@code QRColPivDecompositionHouseholderColumn_DDRM}; Golub and Van Loan, Matrix Computations,
  * 4th ed., 5.4.2) on the column-scaled, weight-scaled design.
  *
- * <p>Steps: build X (n x p) from the design in row blocks; scale each column to unit Euclidean norm
- * (equilibration, which is what lets raw-power polynomials such as NIST's Filip keep their digits);
+ * <p>Steps: build X (n x p) from the design in row blocks; scale each column by the power of two nearest
+ * its Euclidean norm (equilibration, exact in binary arithmetic, which is what lets raw-power polynomials such as NIST's Filip keep their digits);
  * factor XS P = Q R; decide the numerical rank from R's diagonal (a column whose |r_jj| falls below
  * {@value #RANK_TOLERANCE} |r_11| is a linear combination of the others, and the fit stops naming the
  * columns involved); apply Q' to y by the stored Householder reflectors (never forming Q); solve
@@ -31,7 +31,7 @@ import org.phasewright.series.Series;
  * costs, also when the residual is large (where plain refinement of z alone cannot).
  *
  * <p>Cost: 2 n p^2 - 2 p^3 / 3 flops for the factorization, O(n p) for everything else, 16 n p bytes
- * of memory (the design and its factor). The condition number is that of the column-scaled design,
+ * of memory (the scaled design and EJML's column-major copy that becomes its factor). The condition number is that of the column-scaled design,
  * from the singular values of R (O(p^3)).
  */
 final class DenseQrSolver {
@@ -101,40 +101,42 @@ final class DenseQrSolver {
             }
         }
         for (int j = 0; j < p; j++) {
-            scale[j] = Math.sqrt(scale[j]);
+            // a power of two near the column norm: scaling by it is exact, so the scaled design is
+            // the same problem, not a rounded copy (radix scaling as in LAPACK's equilibration)
+            scale[j] = scale[j] == 0 ? 0 : Math.scalb(1.0, Math.getExponent(Math.sqrt(scale[j])));
             if (scale[j] == 0) {
                 throw new ModelException("column '" + design.columnNames().get(j) + "' of the "
                         + design.terms().get(design.termOfColumn(j)).label() + " is zero on every usable sample");
             }
         }
-        double[] xs = new double[n * p];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < p; j++) {
-                xs[i * p + j] = x[i * p + j] / scale[j];
+                x[i * p + j] /= scale[j];
             }
         }
-        DMatrixRMaj a = DMatrixRMaj.wrap(n, p, xs);
         QRColPivDecompositionHouseholderColumn_DDRM qr = new QRColPivDecompositionHouseholderColumn_DDRM(0);
-        qr.decompose(a);
-        xs = null;
-        a = null;
+        qr.decompose(DMatrixRMaj.wrap(n, p, x));
         double[][] qrData = qr.getQR();
         double[] gammas = qr.getGammas();
         int[] piv = qr.getColPivots().clone();
         double[][] rm = upperR(qrData, p);
         checkRank(design, rm, piv);
 
+        // from here on x holds the scaled design XS and coefficients are those of XS (unpivoted)
         double[] qty = y.clone();
         applyQt(qrData, gammas, p, n, qty);
         double[] z = backSubstitute(rm, qty, p);
-        double[] beta = unscale(z, piv, scale);
-        double[] resid = residual(x, y, beta, n, p);
-        refine(x, y, scale, piv, qrData, gammas, rm, z, resid, n, p);
-        beta = unscale(z, piv, scale);
-        resid = residual(x, y, beta, n, p);
+        double[] resid = residual(x, y, unpivot(z, piv), n, p);
+        refine(x, y, piv, qrData, gammas, rm, z, resid, n, p);
+        double[] zs = unpivot(z, piv);
+        resid = residual(x, y, zs, n, p);
         double rss = 0;
         for (double e : resid) {
             rss += e * e;
+        }
+        double[] beta = new double[p];
+        for (int j = 0; j < p; j++) {
+            beta[j] = zs[j] / scale[j];
         }
 
         double[][] rinv = invertUpper(rm, p);
@@ -157,17 +159,16 @@ final class DenseQrSolver {
      * [I A; A' 0] [dr; dz] = [f; g] through the QR factors as h = R^-T g, d = Q' f,
      * dz = R^-1 (d_1 - h), dr = Q (h, d_2).
      */
-    private static void refine(double[] x, double[] y, double[] scale, int[] piv, double[][] qrData, double[] gammas,
+    private static void refine(double[] x, double[] y, int[] piv, double[][] qrData, double[] gammas,
                                double[][] rm, double[] z, double[] r, int n, int p) {
         for (int step = 0; step < REFINEMENTS; step++) {
-            double[] beta = unscale(z, piv, scale);
-            double[] f = residual(x, y, beta, n, p);
+            double[] f = residual(x, y, unpivot(z, piv), n, p);
             for (int i = 0; i < n; i++) {
                 f[i] -= r[i];
             }
             double[] g = new double[p];
             for (int j = 0; j < p; j++) {
-                g[j] = -compensatedColumnDot(x, r, piv[j], n, p) / scale[piv[j]];
+                g[j] = -compensatedColumnDot(x, r, piv[j], n, p);
             }
             double[] h = forwardSubstituteTransposed(rm, g, p);
             applyQt(qrData, gammas, p, n, f);
@@ -270,10 +271,11 @@ final class DenseQrSolver {
         return z;
     }
 
-    private static double[] unscale(double[] z, int[] piv, double[] scale) {
+    /** Coefficients in pivot order back to column order. */
+    private static double[] unpivot(double[] z, int[] piv) {
         double[] b = new double[z.length];
         for (int j = 0; j < z.length; j++) {
-            b[piv[j]] = z[j] / scale[piv[j]];
+            b[piv[j]] = z[j];
         }
         return b;
     }
