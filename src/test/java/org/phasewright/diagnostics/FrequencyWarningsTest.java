@@ -52,6 +52,7 @@ class FrequencyWarningsTest {
         assertThat(m.find()).isTrue();
         double days = Double.parseDouble(m.group(1)) / 86400;
         assertThat(days).isCloseTo(14.77, within(0.01)); // the published synodic period
+        assertThat(w.message()).contains("(14.77 days)");
     }
 
     @Test
