@@ -66,7 +66,7 @@ final class Reports {
             return new GroupReport(g.label(), g.kind(), g.columns(), g.fStat(), g.df1(), g.pValue(), plain.varianceShare());
         }
         ScalarReport s = (ScalarReport) r;
-        return new ScalarReport(s.label(), s.kind(), s.estimate(), s.stdError(), s.ciLow(), s.ciHigh(), s.t(), s.pValue(),
+        return new ScalarReport(s.label(), s.kind(), s.estimate(), s.stdError(), s.ciLow(), s.ciHigh(), s.t(), s.fStat(), s.pValue(),
                 plain.varianceShare());
     }
 

@@ -80,7 +80,7 @@ public final class CoefficientTableWriter {
                 } else if (t instanceof ScalarReport s) {
                     table.row(CsvCells.label(s.label()), s.kind(), "", "", "", "", "", "", "", "",
                             CsvCells.number(s.estimate()), CsvCells.number(s.stdError()), CsvCells.number(s.ciLow()),
-                            CsvCells.number(s.ciHigh()), CsvCells.number(s.t()), "", "", df2,
+                            CsvCells.number(s.ciHigh()), CsvCells.number(s.t()), CsvCells.number(s.fStat()), "1", df2,
                             CsvCells.number(s.pValue()), CsvCells.number(s.varianceShare()));
                 }
             }

@@ -248,7 +248,8 @@ public final class ResultJson {
             n.put("columns", g.columns());
         } else if (t instanceof ScalarReport s) {
             notApplicableAmplitude(n);
-            n.putNull("f_stat");
+            num(n, "f_stat", s.fStat());
+            n.put("df1", 1);
             num(n, "p_value", s.pValue());
             num(n, "variance_share", s.varianceShare());
             num(n, "estimate", s.estimate());
