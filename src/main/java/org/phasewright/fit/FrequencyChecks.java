@@ -43,7 +43,8 @@ public final class FrequencyChecks {
             if (gap < resolution) {
                 out.add(new FitWarning(FitWarning.CLOSE_FREQUENCIES, "the " + owners.get((int) fs[i - 1][1]) + " and the "
                         + owners.get((int) fs[i][1]) + " are " + fmt(gap) + " Hz apart, closer than the record's resolution 1/T = "
-                        + fmt(resolution) + " Hz; a record of at least " + fmt(1 / gap) + " s is needed to separate them,"
+                        + fmt(resolution) + " Hz; a record of at least " + fmt(1 / gap) + " s" + readable(1 / gap)
+                        + " is needed to separate them,"
                         + " so their amplitudes trade against each other"));
             }
         }
@@ -55,6 +56,17 @@ public final class FrequencyChecks {
             }
         }
         return out;
+    }
+
+    /** " (2.5 h)" or " (14.77 days)" for long durations, empty below an hour. */
+    static String readable(double seconds) {
+        if (seconds >= 2 * 86400) {
+            return String.format(Locale.ROOT, " (%.2f days)", seconds / 86400);
+        }
+        if (seconds >= 3600) {
+            return String.format(Locale.ROOT, " (%.2f h)", seconds / 3600);
+        }
+        return "";
     }
 
     static String fmt(double v) {

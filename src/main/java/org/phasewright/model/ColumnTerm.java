@@ -57,7 +57,8 @@ final class ColumnTerm implements Term {
         double se = inf.stdError(0);
         double t = b / se;
         double half = inf.tCritical() * se;
-        return new ScalarReport(label(), kind(), b, se, b - half, b + half, t, inf.twoSidedP(t),
-                inf.groupTest().varianceShare());
+        GroupTest g = inf.groupTest();
+        return new ScalarReport(label(), kind(), b, se, b - half, b + half, t, g.fStat(), inf.twoSidedP(t),
+                g.varianceShare());
     }
 }

@@ -16,14 +16,17 @@ import java.util.Optional;
  * {@code |f - h f0| <= tolerance}; at most one peak per harmonic (the strongest). f0 is then
  * re-estimated by amplitude-squared weighted least squares {@code sum w h f / sum w h^2} and the
  * peaks re-matched (two passes). The score is the share of the peaks' power the matches carry.
- * Among trials explaining at least two peaks, the highest fundamental whose score is within
- * {@code 0.02} of the best is chosen, which rejects sub-harmonics (f0/2 explains everything f0
- * does). Cost: O(P^2 D) for P peaks and D divisors.
+ * Trials so low that a peak placed at random would fall within the tolerance of some harmonic with
+ * probability {@code 2 tol / f0} above 0.1 are not considered (they "explain" peaks by chance).
+ * Among trials explaining at least two peaks, the highest fundamental whose score is at least 0.9
+ * of the best is chosen, which rejects sub-harmonics (f0/2 explains everything f0 does).
+ * Cost: O(P^2 D) for P peaks and D divisors.
  */
 public final class FundamentalSearch {
 
     private static final int STRONGEST = 6;
-    private static final double SCORE_SLACK = 0.02;
+    private static final double SCORE_SHARE = 0.9;
+    private static final double MAX_CHANCE = 0.1;
 
     private FundamentalSearch() {
     }
@@ -52,7 +55,7 @@ public final class FundamentalSearch {
         for (Peak p : strongest) {
             for (int h = 1; h <= maxDivisor; h++) {
                 double f0 = p.frequencyHz() / h;
-                if (f0 < minFundamentalHz || f0 < toleranceHz) {
+                if (f0 < minFundamentalHz || 2 * toleranceHz / f0 > MAX_CHANCE) {
                     break;
                 }
                 FundamentalCandidate c = match(peaks, f0, toleranceHz, totalPower);
@@ -66,7 +69,7 @@ public final class FundamentalSearch {
             return Optional.empty();
         }
         double best = trials.stream().mapToDouble(FundamentalCandidate::explainedPowerFraction).max().orElse(0);
-        return trials.stream().filter(c -> c.explainedPowerFraction() >= best - SCORE_SLACK)
+        return trials.stream().filter(c -> c.explainedPowerFraction() >= SCORE_SHARE * best)
                 .max(Comparator.comparingDouble(FundamentalCandidate::frequencyHz));
     }
 

@@ -73,7 +73,7 @@ class BadInputCatalogueTest {
                                                    @TempDir Path out) throws IOException {
         Path input = BAD.resolve(file);
         Map<String, String> opts = parseOptions(options);
-        Path target = out.resolve(file.endsWith(".wav") ? "cleaned.wav" : "cleaned.csv");
+        Path target = out.resolve(file.endsWith(".wav") ? "cleaned.wav" : file.endsWith(".json") ? "model.json" : "cleaned.csv");
 
         InputException e = catchThrowableOfType(InputException.class, () -> readAndWrite(input, opts, target));
 
@@ -88,7 +88,9 @@ class BadInputCatalogueTest {
 
     /** Reads the input and writes it out again, as a cleaning run would. */
     private static void readAndWrite(Path input, Map<String, String> opts, Path target) {
-        if (input.toString().endsWith(".wav")) {
+        if (input.toString().endsWith(".json")) {
+            ModelFile.save(target, ModelFile.load(input), false);
+        } else if (input.toString().endsWith(".wav")) {
             WavReadOptions o = opts.containsKey("wavchannel")
                     ? WavReadOptions.channel(Integer.parseInt(opts.get("wavchannel"))) : WavReadOptions.defaults();
             WavData d = WavReader.read(input, o);

@@ -312,7 +312,7 @@ public final class CsvReader {
                 }
             } else {
                 for (int j = 0; j < names.size() && chosen.isEmpty(); j++) {
-                    if (j != timeIdx && !CsvSniffer.isText(rec.get(j), decimalComma)) {
+                    if (j != timeIdx && isNumberOrMissing(rec.get(j))) {
                         chosen.add(j);
                     }
                 }
@@ -343,7 +343,7 @@ public final class CsvReader {
                     if (j == timeIdx || chosen.contains(j)) {
                         continue;
                     }
-                    if (CsvSniffer.isText(rec.get(j), decimalComma)) {
+                    if (!isNumberOrMissing(rec.get(j))) {
                         ignored.add(names.get(j));
                     } else {
                         cov.add(j);
@@ -359,6 +359,15 @@ public final class CsvReader {
             covariateValues = new DoubleColumn[covariateIdx.length];
             for (int k = 0; k < covariateIdx.length; k++) {
                 covariateValues[k] = new DoubleColumn(capacity);
+            }
+        }
+
+        private boolean isNumberOrMissing(String cell) {
+            try {
+                NumberCells.parse(cell.trim(), decimalComma);
+                return true;
+            } catch (NumberCells.NotANumber e) {
+                return false;
             }
         }
 

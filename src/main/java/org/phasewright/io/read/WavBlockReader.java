@@ -82,6 +82,10 @@ public final class WavBlockReader implements AutoCloseable {
             if (size == 0) {
                 throw InputException.inFile(Kind.EMPTY_FILE, file, "the file is empty (0 bytes)");
             }
+            if (!WavHeaderPeek.peek(file).riffWave()) {
+                // the JDK would also decode AIFF and AU; this reader promises WAV and checks sizes as WAV
+                throw InputException.inFile(Kind.UNSUPPORTED_AUDIO, file, "not a WAV file: it does not start with a RIFF/WAVE header");
+            }
             InputStream in = new BufferedInputStream(Files.newInputStream(file), 1 << 16);
             try {
                 audio = AudioSystem.getAudioInputStream(in);

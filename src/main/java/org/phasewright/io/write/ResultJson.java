@@ -1,0 +1,308 @@
+package org.phasewright.io.write;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Path;
+import java.util.Objects;
+import org.phasewright.fit.CoefficientEstimate;
+import org.phasewright.fit.FitResult;
+import org.phasewright.fit.FitWarning;
+import org.phasewright.io.ModelFile;
+import org.phasewright.io.SoftwareVersion;
+import org.phasewright.io.read.CsvSummary;
+import org.phasewright.io.read.SamplingSummary;
+import org.phasewright.io.read.WavInfo;
+import org.phasewright.model.GroupReport;
+import org.phasewright.model.HarmonicSeriesReport;
+import org.phasewright.model.ScalarReport;
+import org.phasewright.model.SinusoidReport;
+import org.phasewright.model.TermReport;
+import org.phasewright.series.Series;
+
+/**
+ * The result of a fit as one JSON document (Jackson tree, two-space indentation), for scripts
+ * and reports. Every number is a field of the {@link FitResult} or of the input
+ * {@link Series}; nothing is recomputed. Non-finite numbers (e.g. a standard error of an exact
+ * fit) are written as {@code null}, since JSON has no NaN.
+ *
+ * <p>Top-level fields: {@code format}, {@code format_version}, {@code software} {name, version},
+ * {@code data} (source, name, unit, n_samples, n_observed, n_missing, longest_gap, sampling
+ * "uniform"/"uneven", rate_hz, start_s, end_s, duration_s, time_origin, time_offset_s, covariates, and when known sampling_check and wav),
+ * {@code model} {terms in the model-file layout}, {@code level}, {@code n}, {@code p},
+ * {@code dof}, {@code residual_sd}, {@code rss}, {@code r_squared}, {@code r_squared_centred},
+ * {@code adjusted_r_squared}, {@code overall_f}, {@code overall_df1}, {@code overall_df2},
+ * {@code overall_p}, {@code log_likelihood}, {@code aic}, {@code bic},
+ * {@code condition_number}, {@code terms}, {@code coefficients}, {@code warnings} (messages)
+ * and {@code warning_codes}.
+ *
+ * <p>Each entry of {@code terms} has {@code name}, {@code kind}, {@code frequency_hz} (sinusoids
+ * and harmonic series: the fundamental), {@code amplitude}, {@code amplitude_se},
+ * {@code amplitude_ci} [low, high], {@code phase_deg}, {@code phase_se_deg}, {@code f_stat},
+ * {@code p_value}, {@code variance_share} (null where a field does not apply to the kind), plus
+ * {@code df1}, {@code harmonic}, {@code cos_coefficient}, {@code sin_coefficient} for
+ * sinusoids; {@code harmonics} (a list of sinusoid entries) for harmonic series;
+ * {@code columns} for trends; {@code estimate}, {@code std_error}, {@code ci}, {@code t} for
+ * intercept, step and covariate terms (whose test is the t statistic, so {@code f_stat} is null).
+ */
+public final class ResultJson {
+
+    public static final String FORMAT = "phasewright-result";
+    public static final int FORMAT_VERSION = 1;
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
+    private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
+
+    private final FitResult fit;
+    private final Series data;
+    private String source;
+    private double timeOffsetSeconds;
+    private SamplingSummary sampling;
+    private WavInfo wav;
+
+    private ResultJson(FitResult fit, Series data) {
+        this.fit = Objects.requireNonNull(fit, "fit");
+        this.data = Objects.requireNonNull(data, "data");
+    }
+
+    /** A document for {@code fit} of the series {@code data}. */
+    public static ResultJson of(FitResult fit, Series data) {
+        return new ResultJson(fit, data);
+    }
+
+    /** Names the input file (or any description of the source) in the data summary. */
+    public ResultJson source(String description) {
+        this.source = description;
+        return this;
+    }
+
+    /** Seconds the reader subtracted from numeric times (see {@code CsvSummary.timeOffsetSeconds}). */
+    public ResultJson timeOffsetSeconds(double seconds) {
+        this.timeOffsetSeconds = seconds;
+        return this;
+    }
+
+    /** Adds the reader's sampling check (step statistics, jitter, time gaps) to the data summary. */
+    public ResultJson sampling(SamplingSummary check) {
+        this.sampling = check;
+        return this;
+    }
+
+    /** Takes source, time offset and sampling check from a CSV reader's summary. */
+    public ResultJson readBy(CsvSummary summary) {
+        return source(summary.file().toString()).timeOffsetSeconds(summary.timeOffsetSeconds()).sampling(summary.sampling());
+    }
+
+    /** Takes the source and the sample format from a WAV reader's header information. */
+    public ResultJson readBy(WavInfo info) {
+        this.wav = info;
+        return source(info.file().toString());
+    }
+
+    /** The document as text, ending in a newline (what {@code --json} prints). */
+    public String toJsonString() {
+        try {
+            return MAPPER.writeValueAsString(tree()) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot happen for a tree of plain nodes", e);
+        }
+    }
+
+    /** Writes the document atomically. */
+    public void write(Path file, boolean replace) {
+        String text = toJsonString();
+        AtomicFile.writeText(file, replace, w -> w.write(text));
+    }
+
+    /** The document as a Jackson tree. */
+    public ObjectNode tree() {
+        ObjectNode root = NODES.objectNode();
+        root.put("format", FORMAT);
+        root.put("format_version", FORMAT_VERSION);
+        ObjectNode sw = root.putObject("software");
+        sw.put("name", "Phasewright");
+        sw.put("version", SoftwareVersion.get());
+        root.set("data", dataNode());
+        root.putObject("model").set("terms", ModelFile.termsNode(fit.model()));
+        num(root, "level", fit.level());
+        root.put("n", fit.n());
+        root.put("p", fit.p());
+        root.put("dof", fit.dof());
+        num(root, "residual_sd", fit.residualSd());
+        num(root, "rss", fit.rss());
+        num(root, "r_squared", fit.rSquared());
+        root.put("r_squared_centred", fit.centredRSquared());
+        num(root, "adjusted_r_squared", fit.adjustedRSquared());
+        num(root, "overall_f", fit.overallF());
+        root.put("overall_df1", fit.overallDf1());
+        root.put("overall_df2", fit.overallDf2());
+        num(root, "overall_p", fit.overallP());
+        num(root, "log_likelihood", fit.logLikelihood());
+        num(root, "aic", fit.aic());
+        num(root, "bic", fit.bic());
+        num(root, "condition_number", fit.conditionNumber());
+        ArrayNode terms = root.putArray("terms");
+        for (TermReport t : fit.terms()) {
+            terms.add(termNode(t));
+        }
+        ArrayNode coefs = root.putArray("coefficients");
+        for (CoefficientEstimate c : fit.coefficients()) {
+            ObjectNode n = coefs.addObject();
+            n.put("name", c.name());
+            n.put("term", c.term());
+            num(n, "estimate", c.estimate());
+            num(n, "std_error", c.stdError());
+            num(n, "t", c.t());
+            num(n, "p_value", c.pValue());
+            pair(n, "ci", c.ciLow(), c.ciHigh());
+        }
+        ArrayNode warnings = root.putArray("warnings");
+        ArrayNode codes = root.putArray("warning_codes");
+        for (FitWarning w : fit.warnings()) {
+            warnings.add(w.message());
+            codes.add(w.code());
+        }
+        return root;
+    }
+
+    private ObjectNode dataNode() {
+        ObjectNode d = NODES.objectNode();
+        if (source == null) {
+            d.putNull("source");
+        } else {
+            d.put("source", source);
+        }
+        d.put("name", data.name());
+        d.put("unit", data.unit());
+        d.put("n_samples", data.size());
+        d.put("n_observed", data.observedCount());
+        d.put("n_missing", data.missingCount());
+        d.put("longest_gap", data.longestGap());
+        d.put("sampling", data.isUniform() ? "uniform" : "uneven");
+        if (data.isUniform()) {
+            num(d, "rate_hz", data.rate().getAsDouble());
+        } else {
+            d.putNull("rate_hz");
+        }
+        num(d, "start_s", data.startTime());
+        num(d, "end_s", data.endTime());
+        num(d, "duration_s", data.duration());
+        if (data.origin().isPresent()) {
+            d.put("time_origin", data.origin().get().toString());
+        } else {
+            d.putNull("time_origin");
+        }
+        num(d, "time_offset_s", timeOffsetSeconds);
+        d.putArray("covariates").addAll(data.covariateNames().stream().map(NODES::textNode).toList());
+        if (sampling != null) {
+            ObjectNode c = d.putObject("sampling_check");
+            num(c, "tolerance_steps", sampling.tolerance());
+            num(c, "mean_step_s", sampling.meanStepSeconds());
+            num(c, "median_step_s", sampling.medianStepSeconds());
+            num(c, "min_step_s", sampling.minStepSeconds());
+            num(c, "max_step_s", sampling.maxStepSeconds());
+            num(c, "jitter_rms_s", sampling.jitterRmsSeconds());
+            num(c, "jitter_max_s", sampling.jitterMaxSeconds());
+            c.put("time_gaps", sampling.timeGaps());
+        }
+        if (wav != null) {
+            ObjectNode w = d.putObject("wav");
+            w.put("encoding", wav.encoding().name().toLowerCase(java.util.Locale.ROOT));
+            w.put("bits_per_sample", wav.bitsPerSample());
+            w.put("channels", wav.channels());
+            w.put("selection", wav.selection());
+            num(w, "sample_rate_hz", wav.sampleRateHz());
+        }
+        return d;
+    }
+
+    private static ObjectNode termNode(TermReport t) {
+        ObjectNode n = NODES.objectNode();
+        n.put("name", t.label());
+        n.put("kind", t.kind());
+        if (t instanceof SinusoidReport s) {
+            sinusoid(n, s);
+        } else if (t instanceof HarmonicSeriesReport h) {
+            num(n, "frequency_hz", h.fundamentalHz());
+            notApplicableAmplitude(n);
+            num(n, "f_stat", h.fStat());
+            n.put("df1", h.df1());
+            num(n, "p_value", h.pValue());
+            num(n, "variance_share", h.varianceShare());
+            ArrayNode parts = n.putArray("harmonics");
+            for (SinusoidReport s : h.harmonics()) {
+                ObjectNode p = parts.addObject();
+                p.put("name", s.label());
+                p.put("kind", s.kind());
+                sinusoid(p, s);
+            }
+        } else if (t instanceof GroupReport g) {
+            notApplicableAmplitude(n);
+            num(n, "f_stat", g.fStat());
+            n.put("df1", g.df1());
+            num(n, "p_value", g.pValue());
+            num(n, "variance_share", g.varianceShare());
+            n.put("columns", g.columns());
+        } else if (t instanceof ScalarReport s) {
+            notApplicableAmplitude(n);
+            num(n, "f_stat", s.fStat());
+            n.put("df1", 1);
+            num(n, "p_value", s.pValue());
+            num(n, "variance_share", s.varianceShare());
+            num(n, "estimate", s.estimate());
+            num(n, "std_error", s.stdError());
+            pair(n, "ci", s.ciLow(), s.ciHigh());
+            num(n, "t", s.t());
+        }
+        return n;
+    }
+
+    private static void sinusoid(ObjectNode n, SinusoidReport s) {
+        num(n, "frequency_hz", s.frequencyHz());
+        if (s.harmonic() > 0) {
+            n.put("harmonic", s.harmonic());
+        }
+        num(n, "amplitude", s.amplitude());
+        num(n, "amplitude_se", s.amplitudeSe());
+        pair(n, "amplitude_ci", s.amplitudeCiLow(), s.amplitudeCiHigh());
+        num(n, "phase_deg", s.phaseDeg());
+        num(n, "phase_se_deg", s.phaseSeDeg());
+        num(n, "f_stat", s.fStat());
+        n.put("df1", 2);
+        num(n, "p_value", s.pValue());
+        num(n, "variance_share", s.varianceShare());
+        num(n, "cos_coefficient", s.cosCoefficient());
+        num(n, "sin_coefficient", s.sinCoefficient());
+    }
+
+    private static void notApplicableAmplitude(ObjectNode n) {
+        for (String f : new String[] {"amplitude", "amplitude_se", "amplitude_ci", "phase_deg", "phase_se_deg"}) {
+            n.putNull(f);
+        }
+    }
+
+    private static void num(ObjectNode n, String field, double v) {
+        if (Double.isFinite(v)) {
+            n.put(field, v);
+        } else {
+            n.putNull(field);
+        }
+    }
+
+    private static void pair(ObjectNode n, String field, double low, double high) {
+        ArrayNode a = n.putArray(field);
+        if (Double.isFinite(low)) {
+            a.add(low);
+        } else {
+            a.addNull();
+        }
+        if (Double.isFinite(high)) {
+            a.add(high);
+        } else {
+            a.addNull();
+        }
+    }
+}
