@@ -9,6 +9,10 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 import java.util.concurrent.Callable;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.JsonNodeFactory;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import org.phasewright.fit.FitOptions;
 import org.phasewright.fit.FitResult;
 import org.phasewright.fit.Fitter;
@@ -30,7 +34,9 @@ import picocli.CommandLine.Spec;
  * and with {@code --out DIR} the components CSV, the coefficient table CSV and result.json in DIR.
  * Several files: each is fitted with the same options; one summary row per file goes to the
  * summary CSV ({@code --summary FILE}, else {@code DIR/summary.csv} with {@code --out}, else
- * standard output), and with {@code --out DIR} each file's outputs go to {@code DIR/<file name>/}.
+ * standard output unless {@code --json} is given, which prints a JSON array of the result
+ * documents instead, a failed file as {source, exit_code, error}), and with {@code --out DIR}
+ * each file's outputs go to {@code DIR/<file name>/}.
  * A file that fails does not stop the batch; the exit code is then the highest code met.
  */
 @Command(name = "fit",
@@ -151,11 +157,15 @@ final class FitCommand implements Callable<Integer> {
         int worst = ExitCodes.OK;
         ModelSpec saved = null;
         Set<String> dirNames = new HashSet<>();
+        ArrayNode documents = JsonNodeFactory.instance.arrayNode();
         try (Progress progress = Progress.start("fit", files.size(), quiet)) {
             for (Path file : files) {
                 try {
                     Fitted f = fitOne(root.source(), file, request, base);
                     summary.ok(file.toString(), f.result());
+                    if (json) {
+                        documents.add(FitOutputs.jsonTree(f.record(), f.result()));
+                    }
                     if (outDir != null) {
                         FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), f.record(), f.result());
                     }
@@ -169,6 +179,12 @@ final class FitCommand implements Callable<Integer> {
                     }
                     String message = ErrorHandler.sentence(e.getMessage());
                     summary.failed(file.toString(), code, message);
+                    if (json) {
+                        ObjectNode failed = documents.addObject();
+                        failed.put("source", file.toString());
+                        failed.put("exit_code", code);
+                        failed.put("error", message);
+                    }
                     err.println(spec.qualifiedName() + ": " + message);
                     worst = Math.max(worst, code);
                 }
@@ -179,6 +195,10 @@ final class FitCommand implements Callable<Integer> {
             FitOutputs.writeModel(saveModel, saved);
         }
         Path target = summaryFile != null ? summaryFile : outDir != null ? outDir.resolve("summary.csv") : null;
+        if (json) {
+            out.print(new ObjectMapper().writerWithDefaultPrettyPrinter().writeValueAsString(documents));
+            out.println();
+        }
         if (target != null) {
             if (target.toAbsolutePath().getParent() != null) {
                 Files.createDirectories(target.toAbsolutePath().getParent());
@@ -187,7 +207,7 @@ final class FitCommand implements Callable<Integer> {
             if (!json) {
                 out.println("Fitted " + files.size() + " files; summary in " + target + ".");
             }
-        } else {
+        } else if (!json) {
             summary.write(out);
         }
         out.flush();

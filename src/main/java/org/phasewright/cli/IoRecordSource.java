@@ -68,7 +68,7 @@ final class IoRecordSource implements RecordSource {
                 d.info().encoding().toString().toLowerCase(Locale.ROOT).replace('_', ' '), d.info().channels(),
                 d.info().channels() == 1 ? "" : "s");
         return new LoadedRecord(file.toString(), format, channels, "channel " + channel, d.series(),
-                "full scale", null, 0);
+                "full scale", null, d.info());
     }
 
     private LoadedRecord csv(Path file, RecordRequest request) {
@@ -105,7 +105,7 @@ final class IoRecordSource implements RecordSource {
                 + (d.summary().time() == org.phasewright.io.read.CsvSummary.TimeSource.ISO_8601 ? ", ISO 8601 times" : "");
         ChannelSummary chosen = d.summary().channels().get(0);
         return new LoadedRecord(file.toString(), format, channels, chosen.name(), d.series(), chosen.unit(),
-                d.summary().sampling(), d.summary().timeOffsetSeconds());
+                d.summary(), null);
     }
 
     /** The file column of signal channel {@code n} (1-based), the time column being skipped. */

@@ -1,7 +1,9 @@
 package org.phasewright.cli;
 
 import java.util.List;
+import org.phasewright.io.read.CsvSummary;
 import org.phasewright.io.read.SamplingSummary;
+import org.phasewright.io.read.WavInfo;
 import org.phasewright.series.Series;
 
 /**
@@ -13,13 +15,17 @@ import org.phasewright.series.Series;
  * @param channel   the name of the channel that became {@code series}
  * @param series    the signal, with the requested covariates attached
  * @param unit      the signal's unit as the file states it ("" when it does not)
- * @param sampling  how the reader found the samples spaced, when it examined timestamps (else null)
- * @param timeOffsetSeconds seconds the reader subtracted from numeric times so that t = 0 is the
- *                  first sample (0 when none)
+ * @param csv       the CSV reader's summary, or null for other formats
+ * @param wav       the WAV header information, or null for other formats
  */
 record LoadedRecord(String where, String format, List<String> channels, String channel, Series series,
-                    String unit, SamplingSummary sampling, double timeOffsetSeconds) {
+                    String unit, CsvSummary csv, WavInfo wav) {
     LoadedRecord {
         channels = List.copyOf(channels);
+    }
+
+    /** How the CSV reader found the samples spaced in time; null when it did not examine times. */
+    SamplingSummary sampling() {
+        return csv == null ? null : csv.sampling();
     }
 }
