@@ -134,7 +134,8 @@ final class FitReport {
         out.println("  Residual standard deviation " + Numbers.sig(r.residualSd())
                 + (unit == null || unit.isEmpty() ? " (in the signal's unit)." : " " + unit + "."));
         out.println(String.format(Locale.ROOT, "  The model explains %s %% of the %s variation (adjusted %s %%).",
-                Numbers.percent(r.rSquared()), r.centredRSquared() ? "" : "uncentred", Numbers.percent(r.adjustedRSquared()))
+                Numbers.percentFine(r.rSquared()), r.centredRSquared() ? "" : "uncentred",
+                Numbers.percentFine(r.adjustedRSquared()))
                 .replace("the  variation", "the variation"));
         if (!Double.isNaN(r.overallF())) {
             out.println("  All terms together: F = " + Numbers.sig(r.overallF()) + " on " + r.overallDf1() + " and "

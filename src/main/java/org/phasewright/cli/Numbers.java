@@ -78,6 +78,19 @@ final class Numbers {
         return s;
     }
 
+    /** A share near 100 % with enough decimals to show how near: 99.9966 rather than 100.00. */
+    static String percentFine(double share) {
+        if (Double.isNaN(share)) {
+            return "n/a";
+        }
+        double rest = 1 - share;
+        if (share >= 1 || rest >= 1e-3) {
+            return String.format(Locale.ROOT, "%.2f", 100 * share);
+        }
+        int places = Math.min(8, 1 - (int) Math.floor(Math.log10(100 * rest)));
+        return String.format(Locale.ROOT, "%." + places + "f", 100 * share);
+    }
+
     static String percent(double share) {
         if (Double.isNaN(share)) {
             return "n/a";
