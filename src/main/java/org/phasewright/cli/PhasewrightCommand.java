@@ -81,12 +81,11 @@ public final class PhasewrightCommand implements Runnable {
         return cmd;
     }
 
-    /** The version from the jar's manifest, or a note that this is a development build. */
+    /** The version Maven recorded at build time (see the io package's SoftwareVersion). */
     static final class Version implements IVersionProvider {
         @Override
         public String[] getVersion() {
-            String v = PhasewrightCommand.class.getPackage().getImplementationVersion();
-            return new String[] {"phasewright " + (v == null ? "0.1.0-SNAPSHOT (development build)" : v)};
+            return new String[] {"phasewright " + org.phasewright.io.SoftwareVersion.get()};
         }
     }
 }
