@@ -15,7 +15,8 @@ import java.util.function.DoubleUnaryOperator;
  * (common practice; the median ignores the few bins occupied by tones). Medians are taken at
  * centres a quarter band apart and interpolated linearly. (2) Local maxima above the SNR threshold
  * are candidates, except within the window's main-lobe half-width of the first grid frequency (there
- * the leakage of the mean or of a trend dominates); each gets an interpolated frequency ({@link Periodogram#interpolatePeak}), polished
+ * the leakage of the mean or of a trend dominates) and below {@code minCycles / T} (fewer than about two
+ * cycles in the record cannot be told from a trend); each gets an interpolated frequency ({@link Periodogram#interpolatePeak}), polished
  * by a golden-section maximisation of the {@link ToneProbe} amplitude within half a grid step, and
  * the amplitude read there by the probe. (3) Candidates are taken strongest first; one is
  * dropped when its amplitude is within {@code leakageMarginDb} of the leakage predicted from the
@@ -56,7 +57,8 @@ public final class PeakFinder {
         int k = spectrum.size();
         List<Peak> candidates = new ArrayList<>();
         double minRatio = Math.pow(10, options.minSnrDb() / 20);
-        double lowest = spectrum.frequencyAt(0) + spectrum.resolutionHz() * spectrum.window().mainLobeHalfWidthBins();
+        double lowest = Math.max(spectrum.frequencyAt(0) + spectrum.resolutionHz() * spectrum.window().mainLobeHalfWidthBins(),
+                options.minCycles() / spectrum.recordSeconds());
         for (int j = 1; j < k; j++) {
             if (spectrum.frequencyAt(j) < lowest) {
                 continue;
