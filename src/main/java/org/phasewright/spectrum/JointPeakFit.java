@@ -63,8 +63,14 @@ final class JointPeakFit {
         this.degree = degree;
     }
 
-    /** The result: the peaks (strongest first) and whether the sweeps converged; empty peaks = could not fit. */
-    record Outcome(List<Peak> peaks, boolean refined, int sweeps) {
+    /**
+     * The result: the peaks (strongest first), whether they were re-estimated, the number of sweeps, and the
+     * residual of the joint fit aligned with the series (NaN at gaps; null when not re-estimated).
+     */
+    record Outcome(List<Peak> peaks, boolean refined, int sweeps, double[] residual) {
+        Outcome(List<Peak> peaks, boolean refined, int sweeps) {
+            this(peaks, refined, sweeps, null);
+        }
     }
 
     /**
@@ -118,6 +124,12 @@ final class JointPeakFit {
                 break;
             }
         }
+        fit.residual(f, coef, r);
+        double[] aligned = new double[s.size()];
+        java.util.Arrays.fill(aligned, Double.NaN);
+        for (int i = 0; i < fit.n; i++) {
+            aligned[fit.index[i]] = r[i];
+        }
         double sdTime = timeSpread(s);
         List<Peak> out = new ArrayList<>();
         for (int j = 0; j < k; j++) {
@@ -134,7 +146,7 @@ final class JointPeakFit {
                 kept.add(p);
             }
         }
-        return new Outcome(List.copyOf(kept), true, sweeps);
+        return new Outcome(List.copyOf(kept), true, sweeps, aligned);
     }
 
     /**

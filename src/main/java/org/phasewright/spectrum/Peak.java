@@ -9,7 +9,8 @@ package org.phasewright.spectrum;
  *                       or the joint least-squares amplitude when the peaks were re-estimated
  * @param snrDb          20 log10(amplitude / noiseAmplitude)
  * @param noiseAmplitude local noise level: the RMS amplitude a grid point would read from the noise
- *                       alone, estimated from the median of nearby grid amplitudes (see {@link PeakFinder})
+ *                       alone, estimated from the median of nearby grid amplitudes (see {@link PeakFinder}); of the
+ *                       residual spectrum (the record minus all peaks and the trend) when the peaks were re-estimated
  * @param gridIndex      index of the grid maximum the peak was found at
  * @param frequencyStdErrorHz standard error of the frequency from the local noise level (the single-tone
  *                       Cramér-Rao bound, see {@link JointPeakFit#frequencyStdError}); NaN when not computed

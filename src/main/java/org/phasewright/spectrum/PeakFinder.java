@@ -10,7 +10,8 @@ import java.util.function.DoubleUnaryOperator;
  * Finds the peaks of an amplitude {@link Spectrum}.
  *
  * <p>Method: (1) the local noise level at each grid point is the median of the grid amplitudes
- * within +-{@code noiseHalfWidthBins} resolution bins, divided by sqrt(ln 2): for a noise-only
+ * within +-{@code noiseHalfWidthBins} resolution bins (narrower at low frequencies, see
+ * {@link #noiseLevel}), divided by sqrt(ln 2): for a noise-only
  * spectrum each grid amplitude is Rayleigh distributed, whose median is sqrt(ln 2) times its RMS
  * (common practice; the median ignores the few bins occupied by tones). Medians are taken at
  * centres a quarter band apart and interpolated linearly. (2) Local maxima above the SNR threshold
@@ -150,18 +151,27 @@ public final class PeakFinder {
         return offsetHz -> w.response(offsetHz / res, n);
     }
 
-    /** Local RMS noise amplitude at each grid point (median / sqrt(ln 2) over a band). */
+    /** Half-width of the noise band never goes below this many resolution bins. */
+    static final double MIN_NOISE_HALF_WIDTH_BINS = 4;
+
+    /**
+     * Local RMS noise amplitude at each grid point (median / sqrt(ln 2) over a band). The band is
+     * +-{@code halfWidthBins} resolution bins, narrowed at low frequencies to half the frequency itself
+     * (in bins, but at least {@value #MIN_NOISE_HALF_WIDTH_BINS}): a spectrum that rises steeply towards zero
+     * frequency (weather, drift, any red noise) is then judged against its own level there, not against the
+     * flatter floor above it. Medians are taken at centres a quarter band apart and interpolated linearly.
+     */
     static double[] noiseLevel(Spectrum s, double halfWidthBins) {
         int k = s.size();
-        int half = (int) Math.max(2, Math.round(halfWidthBins * s.resolutionHz() / s.gridStepHz()));
-        int stride = Math.max(1, half / 4);
-        int centres = (k - 1) / stride + 1;
-        double[] at = new double[centres];
-        double[] med = new double[centres];
-        double[] buf = new double[2 * half + 1];
+        double pointsPerBin = s.resolutionHz() / s.gridStepHz();
         double scale = 1 / Math.sqrt(Math.log(2));
-        for (int c = 0; c < centres; c++) {
-            int centre = Math.min(k - 1, c * stride);
+        List<double[]> centres = new ArrayList<>();
+        double[] buf = new double[(int) Math.max(5, 2 * Math.round(halfWidthBins * pointsPerBin) + 1) + 2];
+        int centre = 0;
+        while (true) {
+            double bins = s.frequencyAt(centre) / s.resolutionHz();
+            double halfBins = Math.min(halfWidthBins, Math.max(MIN_NOISE_HALF_WIDTH_BINS, 0.5 * bins));
+            int half = (int) Math.max(2, Math.round(halfBins * pointsPerBin));
             int lo = Math.max(0, centre - half);
             int hi = Math.min(k - 1, centre + half);
             if (hi - lo < 2 * half) {
@@ -177,17 +187,25 @@ public final class PeakFinder {
             }
             Arrays.sort(buf, 0, m);
             double median = m % 2 == 1 ? buf[m / 2] : 0.5 * (buf[m / 2 - 1] + buf[m / 2]);
-            at[c] = centre;
-            med[c] = median * scale;
+            centres.add(new double[] {centre, median * scale});
+            if (centre == k - 1) {
+                break;
+            }
+            centre = Math.min(k - 1, centre + Math.max(1, half / 4));
         }
         double[] out = new double[k];
+        int c = 0;
         for (int j = 0; j < k; j++) {
-            int c = Math.min(centres - 1, j / stride);
-            if (c == centres - 1 || at[c] == j) {
-                out[j] = med[c];
+            while (c + 1 < centres.size() && centres.get(c + 1)[0] <= j) {
+                c++;
+            }
+            double[] a = centres.get(c);
+            if (c + 1 == centres.size() || a[0] == j) {
+                out[j] = a[1];
             } else {
-                double u = (j - at[c]) / (at[c + 1] - at[c]);
-                out[j] = med[c] + u * (med[c + 1] - med[c]);
+                double[] b = centres.get(c + 1);
+                double u = (j - a[0]) / (b[0] - a[0]);
+                out[j] = a[1] + u * (b[1] - a[1]);
             }
         }
         return out;

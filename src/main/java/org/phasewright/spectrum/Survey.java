@@ -29,6 +29,9 @@ import org.phasewright.series.Series;
  */
 public final class Survey {
 
+    /** Expected number of noise peaks the residual search may add. */
+    private static final double HIDDEN_FALSE_PEAKS = 0.01;
+
     private Survey() {
     }
 
@@ -87,14 +90,35 @@ public final class Survey {
         if (options.refinePeaks() && !peaks.isEmpty()) {
             JointPeakFit.Outcome joint = JointPeakFit.refine(data, peaks, Math.max(0, options.detrendDegree()),
                     spectrum.resolutionHz(), enbw);
-            double lowest = options.peaks().minCycles() / spectrum.recordSeconds();
-            // a peak whose joint amplitude falls below the threshold was leakage of the others or of the trend
-            peaks = joint.peaks().stream().filter(p -> p.snrDb() >= options.peaks().minSnrDb()
-                    && p.frequencyHz() >= lowest).toList();
+            int found = 0;
+            if (joint.refined()) {
+                Series residual = data.withValues(joint.residual());
+                Spectrum rest = fft ? Periodogram.of(residual, options.periodogram())
+                        : LombScargle.of(residual, options.lombScargle()).spectrum();
+                double[] noise = PeakFinder.noiseLevel(rest, options.peaks().noiseHalfWidthBins());
+                if (joint.peaks().size() < options.peaks().maxPeaks()) {
+                    List<Peak> hidden = hiddenPeaks(residual, rest, joint.peaks(), fft, options);
+                    if (!hidden.isEmpty()) {
+                        List<Peak> all = new ArrayList<>(joint.peaks());
+                        all.addAll(hidden.subList(0, Math.min(hidden.size(), options.peaks().maxPeaks() - all.size())));
+                        JointPeakFit.Outcome again = JointPeakFit.refine(data, all, Math.max(0, options.detrendDegree()),
+                                spectrum.resolutionHz(), enbw);
+                        if (again.refined()) {
+                            found = all.size() - joint.peaks().size();
+                            joint = again;
+                        }
+                    }
+                }
+                peaks = rescore(joint.peaks(), rest, noise, enbw, JointPeakFit.timeSpread(data), options);
+            } else {
+                peaks = joint.peaks();
+            }
             notes.add(joint.refined()
                     ? new SpectrumNote("peaks_refined", "peak frequencies and amplitudes re-estimated jointly by least"
                     + " squares with the trend (" + joint.sweeps() + (joint.sweeps() == 1 ? " sweep" : " sweeps")
-                    + "); frequency errors from the local noise level")
+                    + "); noise levels and frequency errors from the residual spectrum"
+                    + (found > 0 ? "; " + found + (found == 1 ? " peak" : " peaks")
+                    + " found in the residual spectrum, hidden beside stronger ones" : ""))
                     : new SpectrumNote("peaks_not_refined", "peak frequencies are read off the spectrum, not re-estimated"
                     + " jointly (the record is too long or the peaks cannot be fitted together)"));
         } else {
@@ -117,6 +141,53 @@ public final class Survey {
             }
         }
         return new SurveyResult(spectrum, peaks, f0, fap, notes, others);
+    }
+
+    /**
+     * The jointly estimated peaks with the noise level of the residual spectrum at their frequencies (the leakage
+     * of strong peaks no longer inflates it), their SNR and frequency errors from it; peaks that fall below the SNR
+     * threshold or below minCycles/T were leakage of the others or of the trend and are dropped.
+     */
+    private static List<Peak> rescore(List<Peak> peaks, Spectrum rest, double[] noise, double enbw, double sdTime,
+                                      SurveyOptions options) {
+        double lowest = options.peaks().minCycles() / rest.recordSeconds();
+        List<Peak> out = new ArrayList<>();
+        for (Peak p : peaks) {
+            int j = (int) Math.round((p.frequencyHz() - rest.frequencyAt(0)) / rest.gridStepHz());
+            double level = noise[Math.max(0, Math.min(noise.length - 1, j))];
+            if (!(level > 0)) {
+                level = p.noiseAmplitude();
+            }
+            double snr = 20 * Math.log10(p.amplitude() / level);
+            if (snr >= options.peaks().minSnrDb() && p.frequencyHz() >= lowest) {
+                out.add(new Peak(p.frequencyHz(), p.amplitude(), snr, level, p.gridIndex(),
+                        JointPeakFit.frequencyStdError(level, p.amplitude(), enbw, sdTime)));
+            }
+        }
+        return List.copyOf(out);
+    }
+
+    /**
+     * Peaks of the residual spectrum (the record minus the joint fit) farther than 1/T from every peak already
+     * found: tones a stronger neighbour's leakage hid from the first search (one pass, as in the successive
+     * subtraction of CLEAN, J. A. Högbom 1974, Astron. Astrophys. Suppl. 15, 417). Since the whole residual
+     * spectrum is searched again, a hidden peak must also stand z times above the noise RMS with
+     * {@code exp(-z^2) = 0.01 / bins}: a white-noise amplitude exceeds z RMS in one bin with probability
+     * exp(-z^2) (Rayleigh tail, common practice), so noise alone adds a peak in at most about 1 record in 100.
+     */
+    private static List<Peak> hiddenPeaks(Series residual, Spectrum spectrum, List<Peak> known, boolean fft,
+                                          SurveyOptions options) {
+        ToneProbe probe = fft ? Periodogram.probe(residual, options.periodogram()) : LombScargle.probe(residual);
+        DoubleUnaryOperator response = fft ? PeakFinder.windowResponse(spectrum) : LombScargle.spectralWindow(residual);
+        ToneProbe locator = fft && options.periodogram().window() == Window.FLAT_TOP
+                ? Periodogram.probe(residual, options.periodogram().withWindow(Window.HANN)) : probe;
+        double res = spectrum.resolutionHz();
+        double bins = Math.max(1, (spectrum.frequencyAt(spectrum.size() - 1) - spectrum.frequencyAt(0)) / res);
+        double threshold = Math.max(options.peaks().minSnrDb(), 10 * Math.log10(Math.log(bins / HIDDEN_FALSE_PEAKS)));
+        return PeakFinder.find(spectrum, probe, locator, response, options.peaks()).stream()
+                .filter(p -> p.snrDb() >= threshold)
+                .filter(p -> known.stream().noneMatch(q -> Math.abs(q.frequencyHz() - p.frequencyHz()) < res))
+                .toList();
     }
 
     private static SpectrumNote fundamentalNote(FundamentalSearch.Outcome found, int peakCount, double limit) {
