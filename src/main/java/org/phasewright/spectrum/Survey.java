@@ -78,7 +78,7 @@ public final class Survey {
         if (options.detrendDegree() >= 0) {
             notes.add(new SpectrumNote("detrended", "a least-squares " + degreeName(options.detrendDegree())
                     + " was removed before the periodogram"
-                    + (options.peaks().minCycles() > 0 ? "; peaks below " + g3(options.peaks().minCycles())
+                    + (options.peaks().minCycles() > 0 ? "; peaks below " + compact(options.peaks().minCycles())
                     + "/T (fewer cycles than that in the record) are not listed" : "")));
         }
         List<Peak> peaks = PeakFinder.find(spectrum, probe, locator, response, options.peaks());
@@ -229,6 +229,10 @@ public final class Survey {
             b.append(i == 0 ? "" : ", ").append(ks.get(i));
         }
         return b.toString();
+    }
+
+    private static String compact(double v) {
+        return v == Math.rint(v) ? Long.toString((long) v) : g3(v);
     }
 
     private static String g3(double v) {
