@@ -13,9 +13,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.phasewright.fit.FitOptions;
-import org.phasewright.fit.FitResult;
-import org.phasewright.fit.Fitter;
 import org.phasewright.io.write.AtomicFile;
 import org.phasewright.model.ModelSpec;
 import picocli.CommandLine.Command;
@@ -81,6 +78,9 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     InputOptions input;
 
+    @Mixin
+    CheckOptions checks;
+
     @Option(names = "--level", paramLabel = "LEVEL", converter = Converters.LevelConverter.class, defaultValue = "0.95",
             description = "Confidence level of every interval, e.g. 0.95 or 99%% (default ${DEFAULT-VALUE}).")
     double level;
@@ -106,6 +106,7 @@ final class FitCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         terms.check();
+        checks.check();
         if (terms.autoFundamental() && saveModel != null && files.size() > 1) {
             throw new UsageException("--save-model with --fundamental auto and several files would save one model per"
                     + " file; fit one file, or give the fundamental");
@@ -123,27 +124,27 @@ final class FitCommand implements Callable<Integer> {
 
     private int single(Path file, RecordRequest request, ModelSpec base) throws IOException {
         PrintWriter out = spec.commandLine().getOut();
-        Fitted f;
+        Analysis a;
         try (Progress progress = Progress.start("fit", 1000, quiet)) {
             RecordSource reading = root.source().withProgress((bytes, total, samples) ->
                     progress.at(total > 0 ? 800 * bytes / total : 0));
-            f = fitOne(reading, file, request, base);
+            a = fitOne(reading, file, request, base);
             progress.at(950);
             if (saveModel != null) {
-                FitOutputs.writeModel(saveModel, f.result().model());
+                FitOutputs.writeModel(saveModel, a.fit().model());
             }
             if (outDir != null) {
-                FitOutputs.writeDirectory(outDir, f.record(), f.result());
+                FitOutputs.writeDirectory(outDir, a, terms);
             }
             progress.at(1000);
         }
         if (json) {
-            FitOutputs.printJson(out, f.record(), f.result());
+            FitOutputs.printJson(out, a, terms);
         } else {
-            FitReport.print(out, f.record().where(), f.record().series(), f.record().unit(), f.plan(), f.result());
+            FitReport.print(out, a, terms);
             if (outDir != null) {
                 out.println();
-                out.println("Wrote " + FitOutputs.FILES + " to " + outDir + ".");
+                out.println("Wrote " + FitOutputs.files(a) + " to " + outDir + ".");
             }
         }
         out.flush();
@@ -161,16 +162,16 @@ final class FitCommand implements Callable<Integer> {
         try (Progress progress = Progress.start("fit", files.size(), quiet)) {
             for (Path file : files) {
                 try {
-                    Fitted f = fitOne(root.source(), file, request, base);
-                    summary.ok(file.toString(), f.result());
+                    Analysis a = fitOne(root.source(), file, request, base);
+                    summary.ok(file.toString(), a);
                     if (json) {
-                        documents.add(FitOutputs.jsonTree(f.record(), f.result()));
+                        documents.add(FitOutputs.jsonTree(a, terms));
                     }
                     if (outDir != null) {
-                        FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), f.record(), f.result());
+                        FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), a, terms);
                     }
                     if (saved == null) {
-                        saved = f.result().model();
+                        saved = a.fit().model();
                     }
                 } catch (RuntimeException | IOException e) {
                     int code = ErrorHandler.exitCode(e);
@@ -214,13 +215,12 @@ final class FitCommand implements Callable<Integer> {
         return worst;
     }
 
-    private Fitted fitOne(RecordSource source, Path file, RecordRequest request, ModelSpec base) {
+    private Analysis fitOne(RecordSource source, Path file, RecordRequest request, ModelSpec base) {
         LoadedRecord record = source.load(file, request);
         TermOptions.SuggestedFundamental suggested = terms.autoFundamental()
                 ? Suggestions.fundamental(record) : null;
         ModelPlan plan = terms.plan(base, record.series(), record.where(), suggested);
-        FitResult result = Fitter.fit(record.series(), plan.spec(), FitOptions.defaults().withLevel(level));
-        return new Fitted(record, plan, result);
+        return Analyst.run(record, plan, terms, checks, level);
     }
 
     private static String uniqueName(Path file, Set<String> used) {
@@ -230,8 +230,5 @@ final class FitCommand implements Callable<Integer> {
             name = base + "-" + i;
         }
         return name;
-    }
-
-    private record Fitted(LoadedRecord record, ModelPlan plan, FitResult result) {
     }
 }

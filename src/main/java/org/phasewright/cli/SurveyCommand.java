@@ -130,18 +130,8 @@ final class SurveyCommand implements Callable<Integer> {
             t.row("Nyquist", "no strict limit for uneven sampling; half the median rate is " + Numbers.hertz(half) + " Hz"
                     + inUnit(half));
         }
-        printPlain(out, t);
+        t.printRows(out, "  ");
         out.println();
-    }
-
-    private static void printPlain(PrintWriter out, TextTable t) {
-        java.io.StringWriter buf = new java.io.StringWriter();
-        t.print(new PrintWriter(buf), "  ");
-        String[] lines = buf.toString().split("\\R");
-        // drop the empty header line and its rule: this table is a list of facts
-        for (int i = 2; i < lines.length; i++) {
-            out.println(lines[i]);
-        }
     }
 
     private void spectrum(PrintWriter out, LoadedRecord r, SurveyResult result) {
