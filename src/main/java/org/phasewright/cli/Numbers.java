@@ -57,7 +57,7 @@ final class Numbers {
 
     /**
      * A probability such as a false-alarm probability: {@code <1e-16} below what a double resolves
-     * beside 1, two significant digits in exponent form below 0.001 ({@code 3.2e-09}), else three decimals.
+     * beside 1, two significant digits in exponent form below 0.001 ({@code 3.2e-9}), else three decimals.
      */
     static String probability(double p) {
         if (Double.isNaN(p)) {
@@ -67,7 +67,7 @@ final class Numbers {
             return "<1e-16";
         }
         if (p < 1e-3) {
-            return String.format(Locale.ROOT, "%.1e", p);
+            return String.format(Locale.ROOT, "%.1e", p).replace("e-0", "e-");
         }
         return String.format(Locale.ROOT, "%.3f", p);
     }

@@ -52,8 +52,7 @@ final class RefinementReport {
         double se = g.uncertaintyInUnit(f.frequencyHz(), f.stdErrorHz());
         double lo = g.inUnit(f.ciLowHz());
         double hi = g.inUnit(f.ciHighHz());
-        String symbol = g.unit() == FrequencyUnit.PERIOD ? " " + g.periodUnit() + " period" : " " + g.unit().symbol();
-        return new String[] {withError(g.inUnit(f.frequencyHz()), se) + symbol, Numbers.error(se),
+        return new String[] {g.at(f.frequencyHz(), f.stdErrorHz()).display(), Numbers.error(se),
             withError(Math.min(lo, hi), se), withError(Math.max(lo, hi), se)};
     }
 

@@ -136,7 +136,7 @@ final class SurveyCommand implements Callable<Integer> {
 
     private void spectrum(PrintWriter out, LoadedRecord r, SurveyResult result) {
         for (SpectrumNote n : result.notes()) {
-            out.println("Spectrum: " + ErrorHandler.sentence(n.message()));
+            out.println("Spectrum: " + ErrorHandler.sentence(withProbability(n.message(), result)));
         }
         List<Peak> list = result.peaks().subList(0, Math.min(peaks, result.peaks().size()));
         Map<Integer, Integer> harmonicOfPeak = new TreeMap<>();
@@ -214,6 +214,20 @@ final class SurveyCommand implements Callable<Integer> {
         cmd.append(freqOptions(c.unexplained().subList(0, Math.min(5, c.unexplained().size()))));
         out.println("To fit it:");
         out.println(cmd);
+    }
+
+    /**
+     * The note with its false-alarm probability written from the result's field by
+     * {@link Numbers#probability} ({@code <1e-16}, {@code 3.2e-09}), so a tiny probability does not
+     * read as 0.00.
+     */
+    static String withProbability(String message, SurveyResult result) {
+        if (result.topPeakFalseAlarmProbability().isEmpty()) {
+            return message;
+        }
+        String p = Numbers.probability(result.topPeakFalseAlarmProbability().getAsDouble());
+        return message.replaceAll("false-alarm probability [-+0-9.eE]+",
+                java.util.regex.Matcher.quoteReplacement("false-alarm probability " + p));
     }
 
     private static String freqOptions(List<Peak> list) {
