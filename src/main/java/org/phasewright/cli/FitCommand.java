@@ -42,7 +42,9 @@ import picocli.CommandLine.Spec;
         usageHelpAutoWidth = true,
         description = "Fits sinusoids, harmonic series, a trend, steps and covariates to a record by least squares"
                 + " and reports each component's amplitude and phase with standard errors, intervals, F-tests and"
-                + " share of variance, then the fit summary and warnings in words.",
+                + " share of variance, then the fit summary, residual checks and warnings in words. Optionally refines"
+                + " the frequencies, grows harmonics while significant, compares terms one at a time, and shows"
+                + " standard errors for correlated noise or a robust fit.",
         footerHeading = "%nFrequencies:%n",
         footer = {
             "  50 or 50hz (hertz), 2.5khz, 1485rpm (revolutions per minute),",
@@ -55,10 +57,19 @@ import picocli.CommandLine.Spec;
             "      --harmonics 7",
             "  phasewright fit demo-signals/harbour-level.csv --freq 28.9841042deg/h \\",
             "      --freq 30deg/h --trend poly:2",
-            "  phasewright fit demo-signals/greenhouse-temperature.csv --value-column inside_c \\",
-            "      --fundamental 1/day --harmonics 2 --step 2026-04-14T06:00:00Z \\",
-            "      --covariate outside_c --json",
+            "  phasewright fit demo-signals/greenhouse-temperature.csv \\",
+            "      --value-column inside_c --fundamental 1/day --harmonics 2 \\",
+            "      --step 2026-04-14T06:00:00Z --covariate outside_c --json",
             "  phasewright fit logs/*.csv --fundamental 50 --harmonics 9 --out results",
+            "  phasewright fit demo-signals/pump-accelerometer.csv --fundamental 1470rpm \\",
+            "      --harmonics 7 --skip-harmonics 4-6 --trend poly:2 --refine --errors ar",
+            "  phasewright fit demo-signals/motor-drive-current.csv --fundamental 60 \\",
+            "      --harmonics auto --compare-terms",
+            "  phasewright fit demo-signals/workshop-hum.wav --fundamental 50 --harmonics 7 \\",
+            "      --skip-harmonics 2,4,6 --freq 440 --freq 880 --robust huber",
+            "",
+            "Every report names the standard errors it shows and ends with residual checks",
+            "(Durbin-Watson, autocorrelation, Ljung-Box, Jarque-Bera) and the warnings.",
             "",
             "Exit codes: 0 done, 2 usage error, 3 input error, 4 numerical problem, 1 internal error."})
 final class FitCommand implements Callable<Integer> {
@@ -90,7 +101,8 @@ final class FitCommand implements Callable<Integer> {
     Path saveModel;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write components.csv, coefficients.csv and result.json into DIR (created if missing).")
+            description = "Write components.csv, coefficients.csv (with the standard errors shown), result.json and,"
+                    + " with --refine, frequencies.csv into DIR (created if missing).")
     Path outDir;
 
     @Option(names = "--json", description = "Print the result JSON on standard output and nothing else there.")
