@@ -41,8 +41,8 @@ final class RefinementReport {
             System.arraycopy(inUnit, 0, all, hz.length, inUnit.length);
             t.row(all);
         }
-        out.println(String.format(Locale.ROOT, "Refined frequencies  (nonlinear least squares, %d iterations, %s)",
-                r.iterations(), r.converged() ? "converged" : "not converged"));
+        out.println(String.format(Locale.ROOT, "Refined frequencies  (nonlinear least squares, %d iteration%s, %s)",
+                r.iterations(), r.iterations() == 1 ? "" : "s", r.converged() ? "converged" : "not converged"));
         t.print(out, "  ");
         out.println("  The tables below are the fit at the refined frequencies.");
         out.println();
@@ -63,7 +63,8 @@ final class RefinementReport {
         }
         int places = 1 - (int) Math.floor(Math.log10(se));
         if (places > 9 && v != 0) {
-            int digits = (int) Math.floor(Math.log10(Math.abs(v))) + places;
+            // at most 10 significant digits: beyond them a double's rounding, not the data, speaks
+            int digits = Math.min(9, (int) Math.floor(Math.log10(Math.abs(v))) + places);
             return String.format(Locale.ROOT, "%." + Math.max(1, digits) + "e", v);
         }
         return Numbers.fixed(v, Math.max(0, places));
