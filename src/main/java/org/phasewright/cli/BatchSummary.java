@@ -17,10 +17,14 @@ import org.phasewright.model.HarmonicSeriesReport;
 import org.phasewright.model.ScalarReport;
 import org.phasewright.model.SinusoidReport;
 import org.phasewright.model.TermReport;
+import org.phasewright.refine.RefinedFrequency;
 
 /**
  * The summary CSV of a batch fit: one row per input file. Fixed columns {@code file, status,
- * exit_code, message, n, p, dof, residual_sd, r_squared, warnings}, then for every periodic
+ * exit_code, message, n, p, dof, residual_sd, r_squared, warnings}, then {@code standard_errors}
+ * (which the numbers carry), the refined frequencies with their standard errors ({@code --refine}:
+ * {@code <fundamental|frequency> from <start> Hz frequency_hz}, {@code frequency_se_hz}), the residual
+ * checks ({@code durbin_watson}, {@code ljung_box_p}, {@code jarque_bera_p}), then for every periodic
  * component found in any file ({@code <component> amplitude}, {@code amplitude_se},
  * {@code phase_deg}, {@code phase_se_deg}, {@code p_value}) and every one-column term
  * ({@code <term> estimate}, {@code std_error}), in the order they first appear. A file that could
@@ -34,7 +38,8 @@ final class BatchSummary {
     private final List<Map<String, String>> rows = new ArrayList<>();
     private final Set<String> columns = new LinkedHashSet<>(FIXED);
 
-    void ok(String file, FitResult r) {
+    void ok(String file, Analysis a) {
+        FitResult r = a.fit();
         Map<String, String> row = new LinkedHashMap<>();
         row.put("file", file);
         row.put("status", "ok");
@@ -45,8 +50,22 @@ final class BatchSummary {
         row.put("dof", Integer.toString(r.dof()));
         row.put("residual_sd", num(r.residualSd()));
         row.put("r_squared", num(r.rSquared()));
-        row.put("warnings", r.warnings().stream().map(FitWarning::message).collect(Collectors.joining("; ")));
-        for (TermReport t : r.terms()) {
+        row.put("warnings", a.warnings().stream().map(FitWarning::message).collect(Collectors.joining("; ")));
+        put(row, "standard_errors", a.shown().method());
+        a.refinement().ifPresent(ref -> {
+            for (RefinedFrequency f : ref.frequencies()) {
+                String name = (f.kind().equals("harmonic_series") ? "fundamental " : "frequency ") + "from "
+                        + Numbers.hertz(f.startHz()) + " Hz";
+                put(row, name + " frequency_hz", num(f.frequencyHz()));
+                put(row, name + " frequency_se_hz", num(f.stdErrorHz()));
+            }
+        });
+        a.residuals().ifPresent(d -> {
+            put(row, "durbin_watson", num(d.durbinWatson()));
+            put(row, "ljung_box_p", num(d.ljungBox().pValue()));
+            put(row, "jarque_bera_p", num(d.jarqueBera().pValue()));
+        });
+        for (TermReport t : a.shown().terms()) {
             if (t instanceof SinusoidReport s) {
                 sinusoid(row, s.label(), s);
             } else if (t instanceof HarmonicSeriesReport h) {

@@ -46,6 +46,27 @@ final class Converters {
         }
     }
 
+    /** A significance level strictly between 0 and 1, e.g. {@code 0.01} or {@code 1%}. */
+    static final class ProbabilityConverter implements ITypeConverter<Double> {
+        @Override
+        public Double convert(String value) {
+            String s = value.trim();
+            boolean percent = s.endsWith("%");
+            double v;
+            try {
+                v = Double.parseDouble(percent ? s.substring(0, s.length() - 1).trim() : s);
+            } catch (NumberFormatException e) {
+                throw new TypeConversionException("'" + value + "' is not a significance level; write e.g. 0.01 or 1%");
+            }
+            v = percent ? v / 100 : v;
+            if (!(v > 0 && v < 1)) {
+                throw new TypeConversionException("'" + value + "' is not a significance level: it must lie strictly"
+                        + " between 0 and 1, e.g. 0.01 or 1%");
+            }
+            return v;
+        }
+    }
+
     /** {@code HZ} or {@code auto}: the fundamental of a harmonic series. */
     static final class FundamentalConverter implements ITypeConverter<FundamentalChoice> {
         @Override
@@ -66,6 +87,17 @@ final class Converters {
         public SkipList convert(String value) {
             try {
                 return new SkipList(HarmonicNumbers.parse(value));
+            } catch (IllegalArgumentException e) {
+                throw new TypeConversionException(e.getMessage());
+            }
+        }
+    }
+
+    static final class HarmonicCountConverter implements ITypeConverter<HarmonicCount> {
+        @Override
+        public HarmonicCount convert(String value) {
+            try {
+                return HarmonicCount.parse(value);
             } catch (IllegalArgumentException e) {
                 throw new TypeConversionException(e.getMessage());
             }

@@ -13,9 +13,6 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import org.phasewright.fit.FitOptions;
-import org.phasewright.fit.FitResult;
-import org.phasewright.fit.Fitter;
 import org.phasewright.io.write.AtomicFile;
 import org.phasewright.model.ModelSpec;
 import picocli.CommandLine.Command;
@@ -45,7 +42,9 @@ import picocli.CommandLine.Spec;
         usageHelpAutoWidth = true,
         description = "Fits sinusoids, harmonic series, a trend, steps and covariates to a record by least squares"
                 + " and reports each component's amplitude and phase with standard errors, intervals, F-tests and"
-                + " share of variance, then the fit summary and warnings in words.",
+                + " share of variance, then the fit summary, residual checks and warnings in words. Optionally refines"
+                + " the frequencies, grows harmonics while significant, compares terms one at a time, and shows"
+                + " standard errors for correlated noise or a robust fit.",
         footerHeading = "%nFrequencies:%n",
         footer = {
             "  50 or 50hz (hertz), 2.5khz, 1485rpm (revolutions per minute),",
@@ -58,10 +57,19 @@ import picocli.CommandLine.Spec;
             "      --harmonics 7",
             "  phasewright fit demo-signals/harbour-level.csv --freq 28.9841042deg/h \\",
             "      --freq 30deg/h --trend poly:2",
-            "  phasewright fit demo-signals/greenhouse-temperature.csv --value-column inside_c \\",
-            "      --fundamental 1/day --harmonics 2 --step 2026-04-14T06:00:00Z \\",
-            "      --covariate outside_c --json",
+            "  phasewright fit demo-signals/greenhouse-temperature.csv \\",
+            "      --value-column inside_c --fundamental 1/day --harmonics 2 \\",
+            "      --step 2026-04-14T06:00:00Z --covariate outside_c --json",
             "  phasewright fit logs/*.csv --fundamental 50 --harmonics 9 --out results",
+            "  phasewright fit demo-signals/pump-accelerometer.csv --fundamental 1470rpm \\",
+            "      --harmonics 7 --skip-harmonics 4-6 --trend poly:2 --refine --errors ar",
+            "  phasewright fit demo-signals/motor-drive-current.csv --fundamental 60 \\",
+            "      --harmonics auto --compare-terms",
+            "  phasewright fit demo-signals/workshop-hum.wav --fundamental 50 --harmonics 7 \\",
+            "      --skip-harmonics 2,4,6 --freq 440 --freq 880 --robust huber",
+            "",
+            "Every report names the standard errors it shows and ends with residual checks",
+            "(Durbin-Watson, autocorrelation, Ljung-Box, Jarque-Bera) and the warnings.",
             "",
             "Exit codes: 0 done, 2 usage error, 3 input error, 4 numerical problem, 1 internal error."})
 final class FitCommand implements Callable<Integer> {
@@ -81,6 +89,9 @@ final class FitCommand implements Callable<Integer> {
     @Mixin
     InputOptions input;
 
+    @Mixin
+    CheckOptions checks;
+
     @Option(names = "--level", paramLabel = "LEVEL", converter = Converters.LevelConverter.class, defaultValue = "0.95",
             description = "Confidence level of every interval, e.g. 0.95 or 99%% (default ${DEFAULT-VALUE}).")
     double level;
@@ -90,7 +101,8 @@ final class FitCommand implements Callable<Integer> {
     Path saveModel;
 
     @Option(names = "--out", paramLabel = "DIR",
-            description = "Write components.csv, coefficients.csv and result.json into DIR (created if missing).")
+            description = "Write components.csv, coefficients.csv (with the standard errors shown), result.json and,"
+                    + " with --refine, frequencies.csv into DIR (created if missing).")
     Path outDir;
 
     @Option(names = "--json", description = "Print the result JSON on standard output and nothing else there.")
@@ -106,6 +118,7 @@ final class FitCommand implements Callable<Integer> {
     @Override
     public Integer call() throws IOException {
         terms.check();
+        checks.check();
         if (terms.autoFundamental() && saveModel != null && files.size() > 1) {
             throw new UsageException("--save-model with --fundamental auto and several files would save one model per"
                     + " file; fit one file, or give the fundamental");
@@ -123,27 +136,27 @@ final class FitCommand implements Callable<Integer> {
 
     private int single(Path file, RecordRequest request, ModelSpec base) throws IOException {
         PrintWriter out = spec.commandLine().getOut();
-        Fitted f;
+        Analysis a;
         try (Progress progress = Progress.start("fit", 1000, quiet)) {
             RecordSource reading = root.source().withProgress((bytes, total, samples) ->
                     progress.at(total > 0 ? 800 * bytes / total : 0));
-            f = fitOne(reading, file, request, base);
+            a = fitOne(reading, file, request, base);
             progress.at(950);
             if (saveModel != null) {
-                FitOutputs.writeModel(saveModel, f.result().model());
+                FitOutputs.writeModel(saveModel, a.fit().model());
             }
             if (outDir != null) {
-                FitOutputs.writeDirectory(outDir, f.record(), f.result());
+                FitOutputs.writeDirectory(outDir, a, terms);
             }
             progress.at(1000);
         }
         if (json) {
-            FitOutputs.printJson(out, f.record(), f.result());
+            FitOutputs.printJson(out, a, terms);
         } else {
-            FitReport.print(out, f.record().where(), f.record().series(), f.record().unit(), f.plan(), f.result());
+            FitReport.print(out, a, terms);
             if (outDir != null) {
                 out.println();
-                out.println("Wrote " + FitOutputs.FILES + " to " + outDir + ".");
+                out.println("Wrote " + FitOutputs.files(a) + " to " + outDir + ".");
             }
         }
         out.flush();
@@ -161,16 +174,16 @@ final class FitCommand implements Callable<Integer> {
         try (Progress progress = Progress.start("fit", files.size(), quiet)) {
             for (Path file : files) {
                 try {
-                    Fitted f = fitOne(root.source(), file, request, base);
-                    summary.ok(file.toString(), f.result());
+                    Analysis a = fitOne(root.source(), file, request, base);
+                    summary.ok(file.toString(), a);
                     if (json) {
-                        documents.add(FitOutputs.jsonTree(f.record(), f.result()));
+                        documents.add(FitOutputs.jsonTree(a, terms));
                     }
                     if (outDir != null) {
-                        FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), f.record(), f.result());
+                        FitOutputs.writeDirectory(outDir.resolve(uniqueName(file, dirNames)), a, terms);
                     }
                     if (saved == null) {
-                        saved = f.result().model();
+                        saved = a.fit().model();
                     }
                 } catch (RuntimeException | IOException e) {
                     int code = ErrorHandler.exitCode(e);
@@ -214,13 +227,12 @@ final class FitCommand implements Callable<Integer> {
         return worst;
     }
 
-    private Fitted fitOne(RecordSource source, Path file, RecordRequest request, ModelSpec base) {
+    private Analysis fitOne(RecordSource source, Path file, RecordRequest request, ModelSpec base) {
         LoadedRecord record = source.load(file, request);
         TermOptions.SuggestedFundamental suggested = terms.autoFundamental()
                 ? Suggestions.fundamental(record) : null;
         ModelPlan plan = terms.plan(base, record.series(), record.where(), suggested);
-        FitResult result = Fitter.fit(record.series(), plan.spec(), FitOptions.defaults().withLevel(level));
-        return new Fitted(record, plan, result);
+        return Analyst.run(record, plan, terms, checks, level);
     }
 
     private static String uniqueName(Path file, Set<String> used) {
@@ -230,8 +242,5 @@ final class FitCommand implements Callable<Integer> {
             name = base + "-" + i;
         }
         return name;
-    }
-
-    private record Fitted(LoadedRecord record, ModelPlan plan, FitResult result) {
     }
 }

@@ -1,29 +1,45 @@
 package org.phasewright.cli;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.phasewright.fit.FitResult;
 import org.phasewright.io.ModelFile;
+import org.phasewright.io.write.AtomicFile;
 import org.phasewright.io.write.CoefficientTableWriter;
 import org.phasewright.io.write.ComponentsCsvWriter;
+import org.phasewright.io.write.FrequencyTableWriter;
 import org.phasewright.io.write.ResultJson;
 import org.phasewright.model.ModelSpec;
 
 /**
  * The fit command's files, all written by the io package's writers (each atomically): the result
- * JSON ({@link ResultJson}), the components CSV ({@link ComponentsCsvWriter}), the coefficient
- * table CSV ({@link CoefficientTableWriter}) and the model file ({@link ModelFile}). Existing
- * files are replaced, as a re-run of an analysis expects.
+ * JSON ({@link ResultJson}, with the analysis' further fields from {@link AnalysisJson}), the
+ * components CSV of the least-squares fit ({@link ComponentsCsvWriter}), the coefficient table CSV
+ * with the standard errors shown ({@link CoefficientTableWriter}), the refined frequencies
+ * ({@link FrequencyTableWriter}, with {@code --refine}) and the model file ({@link ModelFile}).
+ * Existing files are replaced, as a re-run of an analysis expects.
  */
 final class FitOutputs {
     static final String COMPONENTS = "components.csv";
     static final String COEFFICIENTS = "coefficients.csv";
+    static final String FREQUENCIES = "frequencies.csv";
     static final String RESULT = "result.json";
-    static final String FILES = COMPONENTS + ", " + COEFFICIENTS + " and " + RESULT;
+
+    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private FitOutputs() {
+    }
+
+    /** The files {@link #writeDirectory} writes for this analysis, in words. */
+    static String files(Analysis a) {
+        return a.refinement().isPresent()
+                ? COMPONENTS + ", " + COEFFICIENTS + ", " + FREQUENCIES + " and " + RESULT
+                : COMPONENTS + ", " + COEFFICIENTS + " and " + RESULT;
     }
 
     static ModelSpec readModel(Path file) {
@@ -38,30 +54,33 @@ final class FitOutputs {
         ModelFile.save(file, spec, true);
     }
 
-    static void writeDirectory(Path dir, LoadedRecord record, FitResult result) throws IOException {
+    static void writeDirectory(Path dir, Analysis a, TermOptions terms) throws IOException {
         Files.createDirectories(dir);
-        ComponentsCsvWriter.write(dir.resolve(COMPONENTS), result, record.series(), true);
-        CoefficientTableWriter.write(dir.resolve(COEFFICIENTS), result, record.unit(), true);
-        json(record, result).write(dir.resolve(RESULT), true);
+        LoadedRecord record = a.record();
+        ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.fit(), record.series(), true);
+        CoefficientTableWriter.write(dir.resolve(COEFFICIENTS), a.fit(), a.shown(), record.unit(), true);
+        if (a.refinement().isPresent()) {
+            FrequencyTableWriter.write(dir.resolve(FREQUENCIES), a.refinement().get().frequencies(), a.fit().level(), true);
+        }
+        String text = text(jsonTree(a, terms));
+        AtomicFile.writeText(dir.resolve(RESULT), true, w -> w.write(text));
     }
 
-    static void printJson(PrintWriter out, LoadedRecord record, FitResult result) {
-        out.print(json(record, result).toJsonString());
+    static void printJson(PrintWriter out, Analysis a, TermOptions terms) {
+        out.print(text(jsonTree(a, terms)));
         out.flush();
     }
 
     /** The result document as a tree, for a batch's JSON array. */
-    static com.fasterxml.jackson.databind.node.ObjectNode jsonTree(LoadedRecord record, FitResult result) {
-        return json(record, result).tree();
+    static ObjectNode jsonTree(Analysis a, TermOptions terms) {
+        return AnalysisJson.tree(a, terms);
     }
 
-    private static ResultJson json(LoadedRecord record, FitResult result) {
-        ResultJson doc = ResultJson.of(result, record.series());
-        if (record.csv() != null) {
-            doc.readBy(record.csv());
-        } else if (record.wav() != null) {
-            doc.readBy(record.wav());
+    private static String text(ObjectNode tree) {
+        try {
+            return MAPPER.writeValueAsString(tree) + "\n";
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("cannot happen for a tree of plain nodes", e);
         }
-        return doc.source(record.where());
     }
 }

@@ -1,6 +1,7 @@
 package org.phasewright.cli;
 
 import java.io.PrintWriter;
+import java.util.List;
 import java.util.Locale;
 import org.phasewright.fit.FitResult;
 import org.phasewright.fit.FitWarning;
@@ -12,27 +13,54 @@ import org.phasewright.model.TermReport;
 import org.phasewright.series.Series;
 
 /**
- * The readable report of one fit, laid out for Phasewright: a table of periodic components
- * (frequency in hertz and as the user wrote it, amplitude with standard error and interval,
- * phase with standard error, F, p, share of variance), a table of the other one-column terms, the
- * joint tests of multi-column terms, a fit summary in sentences, and the warnings in words. It
- * prints fields of the {@link FitResult} only; nothing is recomputed.
+ * The readable report of one fit, laid out for Phasewright: the harmonics grown and the refined
+ * frequencies when asked for, a sentence naming the standard errors shown, a table of periodic
+ * components (frequency in hertz and in the user's unit, amplitude with standard error and
+ * interval, phase with standard error, F, p, share of variance), a table of the other one-column
+ * terms, the joint tests of multi-column terms, the term-by-term comparison when asked for, a fit
+ * summary in sentences, the residual checks, and the warnings in words with what to try next. It
+ * prints fields of core results only; nothing is recomputed.
  */
 final class FitReport {
 
     private FitReport() {
     }
 
-    static void print(PrintWriter out, String where, Series series, String unit, ModelPlan plan, FitResult r) {
-        out.println(where + ": " + describe(series));
+    static void print(PrintWriter out, Analysis a, TermOptions terms) {
+        LoadedRecord record = a.record();
+        FitResult r = a.fit();
+        out.println(record.where() + ": " + describe(record.series()));
         out.println();
         String lvl = Numbers.sig(100 * r.level()) + " %";
-        periodic(out, plan, r, lvl);
-        scalars(out, plan, r, lvl);
-        groups(out, plan, r);
-        summary(out, r, unit);
-        warnings(out, r);
+        a.growth().ifPresent(g -> SelectionReport.growth(out, g, a.plan(), terms));
+        a.refinement().ifPresent(ref -> RefinementReport.print(out, ref, a.plan(), lvl));
+        standardErrors(out, a);
+        List<TermReport> shown = a.shown().terms();
+        String tag = "; standard errors: " + a.shown().method().replace('_', ' ');
+        periodic(out, a.plan(), shown, lvl, tag);
+        scalars(out, a.plan(), shown, lvl, tag);
+        groups(out, a.plan(), shown, tag);
+        a.comparison().ifPresent(t -> SelectionReport.comparison(out, t));
+        summary(out, r, record.unit(), a.robust().isPresent());
+        ResidualCheckReport.print(out, a);
+        warnings(out, a);
         out.flush();
+    }
+
+    private static void standardErrors(PrintWriter out, Analysis a) {
+        out.println("Standard errors shown: " + ErrorHandler.sentence(a.shown().description()));
+        a.robust().ifPresent(rr -> {
+            out.println("  Robust fit: the amplitudes, phases and estimates below are the robust ones; " + rr.downweighted()
+                    + " of " + a.fit().n() + " samples carry weight below 0.5; robust residual scale "
+                    + Numbers.sig(rr.scale()) + unitSuffix(a.record().unit()) + "; " + rr.iterations() + " iterations"
+                    + (rr.converged() ? "." : " (not converged)."));
+            out.println("  The fit summary, residual checks and components are those of the least-squares fit.");
+        });
+        out.println();
+    }
+
+    private static String unitSuffix(String unit) {
+        return unit == null || unit.isEmpty() ? "" : " " + unit;
     }
 
     static String describe(Series s) {
@@ -43,15 +71,15 @@ final class FitReport {
         return sampling + " over " + Numbers.duration(s.duration()) + " (" + gaps + ")";
     }
 
-    private static void periodic(PrintWriter out, ModelPlan plan, FitResult r, String lvl) {
+    private static void periodic(PrintWriter out, ModelPlan plan, List<TermReport> terms, String lvl, String tag) {
         boolean anyUnit = plan.frequencies().values().stream().anyMatch(f -> !f.isHertz())
                 || plan.fundamentals().values().stream().anyMatch(f -> !f.isHertz());
         TextTable t = anyUnit
-                ? new TextTable(2, "component", "as given", "frequency (Hz)", "amplitude", "SE", lvl + " low", lvl + " high",
+                ? new TextTable(2, "component", "your unit", "frequency (Hz)", "amplitude", "SE", lvl + " low", lvl + " high",
                         "phase (deg)", "SE (deg)", "F", "p", "share (%)")
                 : new TextTable(1, "component", "frequency (Hz)", "amplitude", "SE", lvl + " low", lvl + " high",
                         "phase (deg)", "SE (deg)", "F", "p", "share (%)");
-        for (TermReport tr : r.terms()) {
+        for (TermReport tr : terms) {
             if (tr instanceof SinusoidReport s) {
                 row(t, anyUnit, plan.nameOf(s.label()), plan.asGiven(s.label(), 0).map(Frequency::display).orElse(""), s);
             } else if (tr instanceof HarmonicSeriesReport h) {
@@ -64,7 +92,7 @@ final class FitReport {
         if (t.isEmpty()) {
             return;
         }
-        out.println("Periodic components  (x = A cos(2 pi f t - phase), t from the record's time zero)");
+        out.println("Periodic components  (x = A cos(2 pi f t - phase), t from the record's time zero" + tag + ")");
         t.print(out, "  ");
         out.println();
     }
@@ -90,10 +118,10 @@ final class FitReport {
         }
     }
 
-    private static void scalars(PrintWriter out, ModelPlan plan, FitResult r, String lvl) {
+    private static void scalars(PrintWriter out, ModelPlan plan, List<TermReport> terms, String lvl, String tag) {
         TextTable t = new TextTable(2, "term", "kind", "estimate", "SE", lvl + " low", lvl + " high", "t", "p",
                 "share (%)");
-        for (TermReport tr : r.terms()) {
+        for (TermReport tr : terms) {
             if (tr instanceof ScalarReport s) {
                 int p = Numbers.placesFor(s.stdError());
                 t.row(plan.nameOf(s.label()), s.kind().replace('_', ' '), Numbers.fixed(s.estimate(), p), Numbers.fixed(s.stdError(), p),
@@ -104,14 +132,15 @@ final class FitReport {
         if (t.isEmpty()) {
             return;
         }
-        out.println("Level, steps and covariates  (the constant level has no share of the variation about the mean)");
+        out.println("Level, steps and covariates  (the constant level has no share of the variation about the mean" + tag
+                + ")");
         t.print(out, "  ");
         out.println();
     }
 
-    private static void groups(PrintWriter out, ModelPlan plan, FitResult r) {
+    private static void groups(PrintWriter out, ModelPlan plan, List<TermReport> terms, String tag) {
         TextTable t = new TextTable(1, "term", "columns", "F", "p", "share (%)");
-        for (TermReport tr : r.terms()) {
+        for (TermReport tr : terms) {
             if (tr instanceof HarmonicSeriesReport h) {
                 t.row(plan.nameOf(h.label()) + " (all harmonics together)", Integer.toString(h.df1()), Numbers.sig(h.fStat()),
                         Numbers.pValue(h.pValue()), Numbers.percent(h.varianceShare()));
@@ -123,13 +152,13 @@ final class FitReport {
         if (t.isEmpty()) {
             return;
         }
-        out.println("Joint tests (F-test that all of a term's coefficients are zero)");
+        out.println("Joint tests  (F-test that all of a term's coefficients are zero" + tag + ")");
         t.print(out, "  ");
         out.println();
     }
 
-    private static void summary(PrintWriter out, FitResult r, String unit) {
-        out.println("Fit");
+    private static void summary(PrintWriter out, FitResult r, String unit, boolean robust) {
+        out.println(robust ? "Least-squares fit" : "Fit");
         out.println("  " + r.n() + " samples used, " + r.p() + " coefficients, " + r.dof() + " residual degrees of freedom.");
         out.println("  Residual standard deviation " + Numbers.sig(r.residualSd())
                 + (unit == null || unit.isEmpty() ? " (in the signal's unit)." : " " + unit + "."));
@@ -145,14 +174,24 @@ final class FitReport {
         out.println();
     }
 
-    private static void warnings(PrintWriter out, FitResult r) {
-        if (r.warnings().isEmpty()) {
+    private static void warnings(PrintWriter out, Analysis a) {
+        if (a.warnings().isEmpty()) {
             out.println("No warnings.");
-            return;
+        } else {
+            out.println(a.warnings().size() == 1 ? "Warning" : "Warnings");
+            for (FitWarning w : a.warnings()) {
+                out.println("  - " + ErrorHandler.sentence(w.message()));
+            }
         }
-        out.println(r.warnings().size() == 1 ? "Warning" : "Warnings");
-        for (FitWarning w : r.warnings()) {
-            out.println("  - " + ErrorHandler.sentence(w.message()));
+        if (a.warned(org.phasewright.diagnostics.ResidualDiagnostics.AUTOCORRELATED) && !a.plainErrors()
+                && a.robust().isEmpty()) {
+            out.println("  (The standard errors shown already allow for correlated noise: " + a.shown().method()
+                    .replace('_', '-') + ".)");
+        }
+        String hint = Suggestions.forResiduals(a);
+        if (hint != null) {
+            out.println();
+            out.println("Suggestion: " + ErrorHandler.sentence(hint));
         }
     }
 }

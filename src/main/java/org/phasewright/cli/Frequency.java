@@ -26,6 +26,36 @@ record Frequency(double value, FrequencyUnit unit, String periodUnit, double her
         return new Frequency(value * k, unit, periodUnit, hertz * k);
     }
 
+    /** The frequency {@code hz} as a number in this frequency's unit (for a period: the period in its time unit). */
+    double inUnit(double hz) {
+        if (unit == FrequencyUnit.PERIOD) {
+            return 1 / (hz * TimeUnitWord.seconds(periodUnit));
+        }
+        return hz / unit.toHertz();
+    }
+
+    /**
+     * A standard error {@code seHz} of the frequency {@code hz}, in this frequency's unit: scaled by the
+     * unit's factor, or for a period by the derivative of 1/f (P se / f, first order).
+     */
+    double uncertaintyInUnit(double hz, double seHz) {
+        return Math.abs(inUnit(hz)) * seHz / hz;
+    }
+
+    /**
+     * The frequency {@code hz} (for instance a refined one) in this frequency's unit, its number rounded
+     * to the decimals that show two significant digits of its standard error {@code seHz} (all digits
+     * when the error is not a positive number). The hertz value is kept exactly.
+     */
+    Frequency at(double hz, double seHz) {
+        double v = inUnit(hz);
+        double se = uncertaintyInUnit(hz, seHz);
+        if (se > 0 && Double.isFinite(se)) {
+            v = new java.math.BigDecimal(v).setScale(Numbers.placesFor(se), java.math.RoundingMode.HALF_EVEN).doubleValue();
+        }
+        return new Frequency(v, unit, periodUnit, hz);
+    }
+
     /** True when the user wrote plain hertz, so a second column in their unit adds nothing. */
     boolean isHertz() {
         return unit == FrequencyUnit.HERTZ;

@@ -44,6 +44,34 @@ final class Numbers {
         return Frequency.number(Double.parseDouble(String.format(Locale.ROOT, "%.4g", v)));
     }
 
+    /** A standard error to two significant digits, in exponent form when tiny or huge. */
+    static String error(double se) {
+        if (!Double.isFinite(se)) {
+            return "n/a";
+        }
+        if (se != 0 && (Math.abs(se) < 1e-4 || Math.abs(se) >= 1e6)) {
+            return String.format(Locale.ROOT, "%.1e", se);
+        }
+        return new java.math.BigDecimal(se).round(new java.math.MathContext(2)).toPlainString();
+    }
+
+    /**
+     * A probability such as a false-alarm probability: {@code <1e-16} below what a double resolves
+     * beside 1, two significant digits in exponent form below 0.001 ({@code 3.2e-9}), else three decimals.
+     */
+    static String probability(double p) {
+        if (Double.isNaN(p)) {
+            return "n/a";
+        }
+        if (p < 1e-16) {
+            return "<1e-16";
+        }
+        if (p < 1e-3) {
+            return String.format(Locale.ROOT, "%.1e", p).replace("e-0", "e-");
+        }
+        return String.format(Locale.ROOT, "%.3f", p);
+    }
+
     static String pValue(double p) {
         if (Double.isNaN(p)) {
             return "n/a";

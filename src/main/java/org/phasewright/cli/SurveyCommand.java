@@ -130,23 +130,13 @@ final class SurveyCommand implements Callable<Integer> {
             t.row("Nyquist", "no strict limit for uneven sampling; half the median rate is " + Numbers.hertz(half) + " Hz"
                     + inUnit(half));
         }
-        printPlain(out, t);
+        t.printRows(out, "  ");
         out.println();
-    }
-
-    private static void printPlain(PrintWriter out, TextTable t) {
-        java.io.StringWriter buf = new java.io.StringWriter();
-        t.print(new PrintWriter(buf), "  ");
-        String[] lines = buf.toString().split("\\R");
-        // drop the empty header line and its rule: this table is a list of facts
-        for (int i = 2; i < lines.length; i++) {
-            out.println(lines[i]);
-        }
     }
 
     private void spectrum(PrintWriter out, LoadedRecord r, SurveyResult result) {
         for (SpectrumNote n : result.notes()) {
-            out.println("Spectrum: " + ErrorHandler.sentence(n.message()));
+            out.println("Spectrum: " + ErrorHandler.sentence(withProbability(n.message(), result)));
         }
         List<Peak> list = result.peaks().subList(0, Math.min(peaks, result.peaks().size()));
         Map<Integer, Integer> harmonicOfPeak = new TreeMap<>();
@@ -224,6 +214,20 @@ final class SurveyCommand implements Callable<Integer> {
         cmd.append(freqOptions(c.unexplained().subList(0, Math.min(5, c.unexplained().size()))));
         out.println("To fit it:");
         out.println(cmd);
+    }
+
+    /**
+     * The note with its false-alarm probability written from the result's field by
+     * {@link Numbers#probability} ({@code <1e-16}, {@code 3.2e-09}), so a tiny probability does not
+     * read as 0.00.
+     */
+    static String withProbability(String message, SurveyResult result) {
+        if (result.topPeakFalseAlarmProbability().isEmpty()) {
+            return message;
+        }
+        String p = Numbers.probability(result.topPeakFalseAlarmProbability().getAsDouble());
+        return message.replaceAll("false-alarm probability [-+0-9.eE]+",
+                java.util.regex.Matcher.quoteReplacement("false-alarm probability " + p));
     }
 
     private static String freqOptions(List<Peak> list) {

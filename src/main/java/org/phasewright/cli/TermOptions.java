@@ -34,10 +34,21 @@ final class TermOptions {
                     + " fundamental the spectrum suggests.")
     FundamentalChoice fundamental;
 
-    @Option(names = "--harmonics", paramLabel = "K",
-            description = "Harmonics 1..K of the fundamental (default 1, just the fundamental; with auto, the"
-                    + " harmonics the spectrum search explains).")
-    Integer harmonics;
+    @Option(names = "--harmonics", paramLabel = "K|auto", converter = Converters.HarmonicCountConverter.class,
+            description = "Harmonics 1..K of the fundamental (default 1, just the fundamental; with --fundamental auto,"
+                    + " the harmonics the spectrum search explains); auto keeps adding harmonics while each new one"
+                    + " is significant (auto:K tries up to K).")
+    HarmonicCount harmonics;
+
+    @Option(names = "--significance", paramLabel = "ALPHA", converter = Converters.ProbabilityConverter.class,
+            description = "With --harmonics auto: a harmonic is kept when its F-test p-value is below ALPHA"
+                    + " (default 0.01).")
+    Double significance;
+
+    @Option(names = "--allow-missing", paramLabel = "N",
+            description = "With --harmonics auto: how many absent harmonics in a row are stepped over before"
+                    + " growth stops (default 3, so 1, 5 and 7 are found with 2, 3, 4 and 6 absent).")
+    Integer allowMissing;
 
     @Option(names = "--skip-harmonics", paramLabel = "LIST", converter = Converters.SkipConverter.class,
             description = "Harmonic numbers to leave out, e.g. 2,4,6 or 4-6.")
@@ -75,6 +86,21 @@ final class TermOptions {
         return fundamental != null && fundamental.isAuto();
     }
 
+    /** True for {@code --harmonics auto}: the harmonic series is grown while significant. */
+    boolean growHarmonics() {
+        return harmonics != null && harmonics.grow();
+    }
+
+    /** The p-value below which a grown harmonic is kept. */
+    double growthSignificance() {
+        return significance == null ? 0.01 : significance;
+    }
+
+    /** Absent harmonics in a row that growth steps over. */
+    int growthAllowMissing() {
+        return allowMissing == null ? 3 : allowMissing;
+    }
+
     /** Checks combinations that parsing alone cannot. */
     void check() {
         if (fundamental == null && harmonics != null) {
@@ -83,8 +109,18 @@ final class TermOptions {
         if (fundamental == null && skip != null) {
             throw new UsageException("--skip-harmonics needs --fundamental");
         }
-        if (harmonics != null && harmonics < 1) {
-            throw new UsageException("--harmonics must be at least 1, got " + harmonics);
+        if (growHarmonics() && skip != null) {
+            throw new UsageException("--skip-harmonics does not go with --harmonics auto, which itself leaves out the"
+                    + " harmonics that are not significant");
+        }
+        if (!growHarmonics() && significance != null) {
+            throw new UsageException("--significance needs --harmonics auto");
+        }
+        if (!growHarmonics() && allowMissing != null) {
+            throw new UsageException("--allow-missing needs --harmonics auto");
+        }
+        if (allowMissing != null && allowMissing < 0) {
+            throw new UsageException("--allow-missing must be 0 or more, got " + allowMissing);
         }
         if (!namesTerms()) {
             throw new UsageException("name the terms to fit: --freq, --fundamental, --trend, --step, --covariate"
@@ -117,7 +153,9 @@ final class TermOptions {
             }
             if (fundamental != null) {
                 Frequency f0 = fundamental.isAuto() ? Frequency.hertz(suggested.fundamentalHz()) : fundamental.frequency();
-                int k = harmonics != null ? harmonics : fundamental.isAuto() ? suggested.harmonics() : 1;
+                // --harmonics auto starts from the fundamental alone; the fit command grows the series
+                int k = growHarmonics() ? 1 : harmonics != null ? harmonics.count()
+                        : fundamental.isAuto() ? suggested.harmonics() : 1;
                 List<Integer> skipped = skip == null ? List.of() : skip.harmonics();
                 for (int s : skipped) {
                     if (s > k) {

@@ -30,6 +30,16 @@ final class TextTable {
         return rows.isEmpty();
     }
 
+    /** Prints the rows only, aligned as {@link #print} aligns them, without the header and its rule (a list of facts). */
+    void printRows(PrintWriter out, String indent) {
+        java.io.StringWriter buf = new java.io.StringWriter();
+        print(new PrintWriter(buf), indent);
+        String[] lines = buf.toString().split("\\R");
+        for (int i = 2; i < lines.length; i++) {
+            out.println(lines[i]);
+        }
+    }
+
     void print(PrintWriter out, String indent) {
         int[] width = new int[header.size()];
         for (int c = 0; c < width.length; c++) {

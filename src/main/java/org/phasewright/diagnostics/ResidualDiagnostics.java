@@ -64,16 +64,25 @@ public final class ResidualDiagnostics {
         List<FitWarning> warnings = new ArrayList<>();
         if (lb.pValue() < WARN_P) {
             warnings.add(new FitWarning(AUTOCORRELATED, String.format(Locale.ROOT,
-                    "the residuals are autocorrelated (Ljung-Box p = %.2g over %d lags, lag-1 autocorrelation %.2f):"
+                    "the residuals are autocorrelated (Ljung-Box p %s over %d lags, lag-1 autocorrelation %.2f):"
                             + " the plain standard errors are likely too small; use a correction for correlated noise",
-                    lb.pValue(), maxLag, acf[0])));
+                    probability(lb.pValue()), maxLag, acf[0])));
         }
         if (jb.pValue() < WARN_P) {
             warnings.add(new FitWarning(NON_NORMAL, String.format(Locale.ROOT,
-                    "the residuals are not normal (Jarque-Bera p = %.2g, skewness %.2f, kurtosis %.2f): look for spikes"
-                            + " or dropouts, and consider the robust fit", jb.pValue(), jb.skewness(), jb.kurtosis())));
+                    "the residuals are not normal (Jarque-Bera p %s, skewness %.2f, kurtosis %.2f): look for spikes"
+                            + " or dropouts, and consider the robust fit", probability(jb.pValue()), jb.skewness(),
+                    jb.kurtosis())));
         }
         return new ResidualReport(n, dw, acf, 1.96 / Math.sqrt(n), lb, jb, warnings);
+    }
+
+    /** "= 0.032", "= 3.1e-09" or "< 1e-16" (a p-value that underflows double precision). */
+    static String probability(double p) {
+        if (p < 1e-16) {
+            return "< 1e-16";
+        }
+        return String.format(Locale.ROOT, p < 1e-3 ? "= %.2g" : "= %.3f", p).replace("e-0", "e-");
     }
 
     static int count(double[] r) {

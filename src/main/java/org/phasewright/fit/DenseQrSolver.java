@@ -191,16 +191,7 @@ final class DenseQrSolver {
     /** v := Q v, the reflectors applied in reverse order. */
     private static void applyQ(double[][] qrData, double[] gammas, int p, int n, double[] v) {
         for (int j = p - 1; j >= 0; j--) {
-            double[] u = qrData[j];
-            double s = v[j];
-            for (int k = j + 1; k < n; k++) {
-                s += u[k] * v[k];
-            }
-            s *= gammas[j];
-            v[j] -= s;
-            for (int k = j + 1; k < n; k++) {
-                v[k] -= u[k] * s;
-            }
+            reflect(qrData[j], gammas[j], j, n, v);
         }
     }
 
@@ -246,16 +237,20 @@ final class DenseQrSolver {
     /** y := Q' y, applying the Householder reflectors I - gamma u u' in order (u_j = 1 implicitly). */
     private static void applyQt(double[][] qrData, double[] gammas, int p, int n, double[] v) {
         for (int j = 0; j < p; j++) {
-            double[] u = qrData[j];
-            double s = v[j];
-            for (int k = j + 1; k < n; k++) {
-                s += u[k] * v[k];
-            }
-            s *= gammas[j];
-            v[j] -= s;
-            for (int k = j + 1; k < n; k++) {
-                v[k] -= u[k] * s;
-            }
+            reflect(qrData[j], gammas[j], j, n, v);
+        }
+    }
+
+    /** v := (I - gamma u u') v for the reflector u stored in column j below the diagonal. */
+    private static void reflect(double[] u, double gamma, int j, int n, double[] v) {
+        double s = v[j];
+        for (int k = j + 1; k < n; k++) {
+            s += u[k] * v[k];
+        }
+        s *= gamma;
+        v[j] -= s;
+        for (int k = j + 1; k < n; k++) {
+            v[k] -= u[k] * s;
         }
     }
 

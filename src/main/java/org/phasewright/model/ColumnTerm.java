@@ -6,7 +6,7 @@ import java.util.List;
  * A term of one column given cell by cell (intercept, step, covariate). Its report is the single
  * coefficient with its standard error, interval and t-test.
  */
-final class ColumnTerm implements Term {
+class ColumnTerm implements Term {
 
     /** Evaluates the column at row {@code i}, writing to {@code out[at]}. */
     interface Cell {

@@ -17,13 +17,22 @@ public sealed interface TermSpec
     /** Binds the spec to a record, checking what can be checked before any fitting. */
     Term bind(BindingContext context);
 
-    /** Formats a frequency in hertz compactly and exactly enough to tell terms apart. */
+    /**
+     * Formats a frequency in hertz for labels: at most 10 significant digits, trailing zeros
+     * dropped, plain decimals from 0.001 Hz up and scientific notation below ("50 Hz",
+     * "24.74991206 Hz", "2.2364278e-5 Hz").
+     */
     static String hertz(double f) {
-        String s = Double.toString(f);
-        if (s.contains("E")) {
-            s = String.format(java.util.Locale.ROOT, "%.6g", f);
-        } else if (s.endsWith(".0")) {
-            s = s.substring(0, s.length() - 2);
+        java.math.BigDecimal d = new java.math.BigDecimal(f).round(new java.math.MathContext(10)).stripTrailingZeros();
+        String s;
+        if (f != 0 && Math.abs(f) < 1e-3) {
+            String mantissa = d.unscaledValue().toString();
+            int exponent = mantissa.length() - 1 - d.scale();
+            String digits = mantissa.replaceFirst("^-", "");
+            s = (f < 0 ? "-" : "") + digits.charAt(0) + (digits.length() > 1 ? "." + digits.substring(1) : "")
+                    + "e" + (exponent - (mantissa.length() - digits.length()));
+        } else {
+            s = d.toPlainString();
         }
         return s + " Hz";
     }

@@ -127,8 +127,11 @@ public final class SeCorrection {
         }
         double[][] cov = DenseRows.sandwich(unscaled(plain), m);
         int dof = plain.dof() - ar.phi().length;
-        String desc = SeMethod.AR_NOISE.description().replace("AR(p)", "AR(" + ar.phi().length + ")")
-                + " (coefficients " + format(ar.phi()) + ")";
+        String desc = ar.phi().length == 0
+                ? "least-squares estimates; standard errors from a model of the residual noise, which the order"
+                        + " selection found white (AR order 0), so they equal the plain ones"
+                : SeMethod.AR_NOISE.description().replace("AR(p)", "AR(" + ar.phi().length + ")")
+                        + " (coefficients " + format(ar.phi()) + ")";
         return new CorrectedInference(SeMethod.AR_NOISE, desc, Reports.coefficients(design, beta, cov, dof, plain.level()),
                 cov, Reports.terms(plain, beta, cov, dof), dof, ar.phi(), Double.NaN, List.of(), plain);
     }

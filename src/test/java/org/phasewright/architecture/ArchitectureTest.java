@@ -36,6 +36,14 @@ class ArchitectureTest {
                 .check(classes);
     }
 
+    /** Commons Math is on the runtime class path only because JTransforms needs it; we use it as a test reference. */
+    @Test
+    void mainCodeDoesNotUseTheReferenceLibrary() {
+        noClasses().that().resideInAPackage("org.phasewright..")
+                .should().dependOnClassesThat().resideInAPackage("org.apache.commons.math3..")
+                .check(classes);
+    }
+
     @Test
     void corePrintsNothing() {
         noClasses().that().resideInAnyPackage(CORE)

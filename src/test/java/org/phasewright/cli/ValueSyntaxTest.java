@@ -11,7 +11,7 @@ import org.phasewright.model.PolynomialTrend;
 import org.phasewright.model.SplineTrend;
 import org.phasewright.series.Series;
 
-/** The syntaxes of --step, --trend, --skip-harmonics and --level. */
+/** The syntaxes of --step, --trend, --skip-harmonics, --harmonics and --level, and refined frequencies in the user's unit. */
 class ValueSyntaxTest {
 
     @Test
@@ -67,5 +67,30 @@ class ValueSyntaxTest {
         assertThatThrownBy(() -> ConfidenceLevel.parse("1")).hasMessageContaining("strictly between");
         assertThatThrownBy(() -> ConfidenceLevel.parse("95")).hasMessageContaining("strictly between");
         assertThatThrownBy(() -> ConfidenceLevel.parse("high")).hasMessageContaining("not a confidence level");
+    }
+
+    @Test
+    void harmonicCounts() {
+        assertThat(HarmonicCount.parse("7")).isEqualTo(new HarmonicCount(7, false));
+        assertThat(HarmonicCount.parse("auto")).isEqualTo(new HarmonicCount(HarmonicCount.DEFAULT_LIMIT, true));
+        assertThat(HarmonicCount.parse("AUTO:20")).isEqualTo(new HarmonicCount(20, true));
+        assertThatThrownBy(() -> HarmonicCount.parse("0")).hasMessageContaining("at least 1");
+        assertThatThrownBy(() -> HarmonicCount.parse("auto:")).hasMessageContaining("not a harmonic count");
+        assertThatThrownBy(() -> HarmonicCount.parse("lots")).hasMessageContaining("auto:K");
+    }
+
+    @Test
+    void refinedFrequenciesKeepTheUsersUnitRoundedToTheirError() {
+        Frequency rpm = FrequencyParser.parse("1470rpm");
+        Frequency refined = rpm.at(24.7499121, 0.00017);
+        assertThat(refined.hertz()).isEqualTo(24.7499121);
+        // SE 0.0102 rpm: two significant digits are the third decimal
+        assertThat(refined.display()).isEqualTo("1484.995 rpm");
+        assertThat(rpm.uncertaintyInUnit(24.7499121, 0.00017)).isEqualTo(0.00017 * 60, org.assertj.core.data.Offset.offset(1e-12));
+        Frequency day = FrequencyParser.parse("period:1day");
+        // a period's error is the frequency's times P / f (first order): 1e-9 Hz at 1/day is 0.0000864 day
+        assertThat(day.uncertaintyInUnit(1 / 86400.0, 1e-9)).isEqualTo(86400 * 1e-9, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(day.at(1.157701978e-5, 3.57e-9).display()).isEqualTo("period 0.99975 day");
+        assertThat(Frequency.hertz(60).at(60.000031, Double.NaN).display()).isEqualTo("60.000031 Hz");
     }
 }

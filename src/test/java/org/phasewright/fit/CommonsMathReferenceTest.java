@@ -52,17 +52,7 @@ class CommonsMathReferenceTest {
                 new HarmonicSeries(2.6, 3), new Step(tMid), new Covariate("load"));
         FitResult fit = Fitter.fit(s, spec);
 
-        double[] x = fit.design().rowsAt(new double[0]);
-        assertThat(x).isEmpty();
-        double[][] design = new double[n][fit.p()];
-        double[] block = new double[n * fit.p()];
-        fit.design().fillRows(s, 0, n, block);
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(block, i * fit.p(), design[i], 0, fit.p());
-        }
-        OLSMultipleLinearRegression ref = new OLSMultipleLinearRegression(0);
-        ref.setNoIntercept(true);
-        ref.newSampleData(y, design);
+        OLSMultipleLinearRegression ref = reference(fit, s, y);
         double[] b = ref.estimateRegressionParameters();
         double[] se = ref.estimateRegressionParametersStandardErrors();
         for (int j = 0; j < fit.p(); j++) {
@@ -84,15 +74,7 @@ class CommonsMathReferenceTest {
         Series s = Series.uniform(0, 10, y);
         FitResult fit = Fitter.fit(s, ModelSpec.of(new Intercept(), new PolynomialTrend(3), new Sinusoid(0.4)),
                 FitOptions.defaults().withLeverages(true));
-        double[] block = new double[n * fit.p()];
-        fit.design().fillRows(s, 0, n, block);
-        double[][] design = new double[n][fit.p()];
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(block, i * fit.p(), design[i], 0, fit.p());
-        }
-        OLSMultipleLinearRegression ref = new OLSMultipleLinearRegression(0);
-        ref.setNoIntercept(true);
-        ref.newSampleData(y, design);
+        OLSMultipleLinearRegression ref = reference(fit, s, y);
         RealMatrix hat = ref.calculateHat();
         double[] h = fit.leverages().orElseThrow();
         double sum = 0;
@@ -114,15 +96,7 @@ class CommonsMathReferenceTest {
         }
         Series s = Series.uniform(0, 20, y);
         FitResult fit = Fitter.fit(s, ModelSpec.of(new Intercept(), new PolynomialTrend(1), new Sinusoid(0.8)));
-        double[] block = new double[n * fit.p()];
-        fit.design().fillRows(s, 0, n, block);
-        double[][] design = new double[n][fit.p()];
-        for (int i = 0; i < n; i++) {
-            System.arraycopy(block, i * fit.p(), design[i], 0, fit.p());
-        }
-        OLSMultipleLinearRegression ref = new OLSMultipleLinearRegression(0);
-        ref.setNoIntercept(true);
-        ref.newSampleData(y, design);
+        OLSMultipleLinearRegression ref = reference(fit, s, y);
         double[][] v = ref.estimateRegressionParametersVariance();
         double s2 = ref.estimateErrorVariance();
         double[] times = {3.3, 7.77, 14.9};
@@ -141,5 +115,20 @@ class CommonsMathReferenceTest {
             assertThat(rel(pr.meanHigh()[i] - pr.mean()[i], tc * seMean)).isLessThan(1e-7);
             assertThat(rel(pr.newHigh()[i] - pr.mean()[i], tc * seNew)).isLessThan(1e-7);
         }
+    }
+
+    /** Commons Math's regression on exactly the engine's design matrix (no extra intercept). */
+    private static OLSMultipleLinearRegression reference(FitResult fit, Series s, double[] y) {
+        int n = s.size();
+        double[] block = new double[n * fit.p()];
+        fit.design().fillRows(s, 0, n, block);
+        double[][] design = new double[n][fit.p()];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(block, i * fit.p(), design[i], 0, fit.p());
+        }
+        OLSMultipleLinearRegression ref = new OLSMultipleLinearRegression(0);
+        ref.setNoIntercept(true);
+        ref.newSampleData(y, design);
+        return ref;
     }
 }

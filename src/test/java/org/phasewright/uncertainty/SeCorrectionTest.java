@@ -38,7 +38,7 @@ class SeCorrectionTest {
                     within(1e-9 * plain.coefficients().get(j).stdError()));
             assertThat(ar.coefficients().get(j).estimate()).isEqualTo(plain.coefficients().get(j).estimate());
         }
-        assertThat(ar.description()).contains("AR(0)");
+        assertThat(ar.description()).contains("AR order 0").contains("equal the plain ones");
     }
 
     @Test

@@ -20,7 +20,8 @@ import org.phasewright.model.TermReport;
  * (e.g. {@code amplitude 95% CI low}), {@code phase [deg]}, {@code phase SE [deg]},
  * {@code estimate}, {@code estimate SE}, {@code estimate CI low/high} (intercept, steps,
  * covariates), {@code t}, {@code F}, {@code df1}, {@code df2}, {@code p-value},
- * {@code variance share}. Cells that do not apply to a kind are empty.
+ * {@code variance share}. Cells that do not apply to a kind are empty. The fit's own (plain)
+ * standard errors are written unless a {@link ShownInference} names others.
  */
 public final class CoefficientTableWriter {
 
@@ -59,11 +60,19 @@ public final class CoefficientTableWriter {
     }
 
     public static void write(Path target, FitResult fit, String unit, boolean replace) {
+        write(target, fit, ShownInference.of(fit, "plain", "plain least-squares standard errors"), unit, replace);
+    }
+
+    /**
+     * Writes the term reports of {@code shown} (e.g. with corrected standard errors) for the fit
+     * {@code fit}; {@code df2} is the shown inference's degrees of freedom.
+     */
+    public static void write(Path target, FitResult fit, ShownInference shown, String unit, boolean replace) {
         List<String> header = headers(fit, unit);
-        String df2 = Integer.toString(fit.dof());
+        String df2 = Integer.toString(shown.dof());
         AtomicFile.writeText(target, replace, w -> {
             CsvTableWriter table = new CsvTableWriter(w, header);
-            for (TermReport t : fit.terms()) {
+            for (TermReport t : shown.terms()) {
                 if (t instanceof SinusoidReport s) {
                     sinusoidRow(table, s, df2);
                 } else if (t instanceof HarmonicSeriesReport h) {

@@ -7,6 +7,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Objects;
 import org.phasewright.fit.CoefficientEstimate;
 import org.phasewright.fit.FitResult;
@@ -37,7 +38,10 @@ import org.phasewright.series.Series;
  * {@code adjusted_r_squared}, {@code overall_f}, {@code overall_df1}, {@code overall_df2},
  * {@code overall_p}, {@code log_likelihood}, {@code aic}, {@code bic},
  * {@code condition_number}, {@code terms}, {@code coefficients}, {@code warnings} (messages)
- * and {@code warning_codes}.
+ * and {@code warning_codes}. When {@link #shown(ShownInference)} is given, {@code terms} and
+ * {@code coefficients} carry its standard errors and a {@code standard_errors} object {method,
+ * description, dof} says which they are; {@link #warnings(List)} replaces the fit's warnings by a
+ * longer list (the fit's own plus those of later checks).
  *
  * <p>Each entry of {@code terms} has {@code name}, {@code kind}, {@code frequency_hz} (sinusoids
  * and harmonic series: the fundamental), {@code amplitude}, {@code amplitude_se},
@@ -62,6 +66,8 @@ public final class ResultJson {
     private double timeOffsetSeconds;
     private SamplingSummary sampling;
     private WavInfo wav;
+    private ShownInference shown;
+    private List<FitWarning> warnings;
 
     private ResultJson(FitResult fit, Series data) {
         this.fit = Objects.requireNonNull(fit, "fit");
@@ -100,6 +106,21 @@ public final class ResultJson {
     public ResultJson readBy(WavInfo info) {
         this.wav = info;
         return source(info.file().toString());
+    }
+
+    /**
+     * Writes these terms and coefficients instead of the fit's own (plain least-squares) ones, and
+     * names their standard errors in a {@code standard_errors} object.
+     */
+    public ResultJson shown(ShownInference inference) {
+        this.shown = Objects.requireNonNull(inference, "inference");
+        return this;
+    }
+
+    /** Writes these warnings instead of the fit's own; the list should include the fit's. */
+    public ResultJson warnings(List<FitWarning> all) {
+        this.warnings = List.copyOf(all);
+        return this;
     }
 
     /** The document as text, ending in a newline (what {@code --json} prints). */
@@ -144,12 +165,18 @@ public final class ResultJson {
         num(root, "aic", fit.aic());
         num(root, "bic", fit.bic());
         num(root, "condition_number", fit.conditionNumber());
+        if (shown != null) {
+            ObjectNode se = root.putObject("standard_errors");
+            se.put("method", shown.method());
+            se.put("description", shown.description());
+            se.put("dof", shown.dof());
+        }
         ArrayNode terms = root.putArray("terms");
-        for (TermReport t : fit.terms()) {
+        for (TermReport t : shown != null ? shown.terms() : fit.terms()) {
             terms.add(termNode(t));
         }
         ArrayNode coefs = root.putArray("coefficients");
-        for (CoefficientEstimate c : fit.coefficients()) {
+        for (CoefficientEstimate c : shown != null ? shown.coefficients() : fit.coefficients()) {
             ObjectNode n = coefs.addObject();
             n.put("name", c.name());
             n.put("term", c.term());
@@ -161,7 +188,7 @@ public final class ResultJson {
         }
         ArrayNode warnings = root.putArray("warnings");
         ArrayNode codes = root.putArray("warning_codes");
-        for (FitWarning w : fit.warnings()) {
+        for (FitWarning w : this.warnings != null ? this.warnings : fit.warnings()) {
             warnings.add(w.message());
             codes.add(w.code());
         }

@@ -15,6 +15,14 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.phasewright.fit.Component;
 import org.phasewright.fit.FitResult;
+import org.phasewright.fit.FitWarning;
+import org.phasewright.refine.FrequencyRefiner;
+import org.phasewright.refine.RefinedFrequency;
+import org.phasewright.refine.Refinement;
+import org.phasewright.uncertainty.CorrectedInference;
+import org.phasewright.uncertainty.CorrectionOptions;
+import org.phasewright.uncertainty.SeCorrection;
+import org.phasewright.uncertainty.SeMethod;
 import org.phasewright.io.OutputException;
 import org.phasewright.io.SoftwareVersion;
 import org.phasewright.io.read.ColumnRef;
@@ -181,5 +189,57 @@ class FitWritersTest {
         JsonNode root = new ObjectMapper().readTree(json);
         assertThat(root.get("data").get("source").isNull()).isTrue();
         assertThat(root.get("warnings").size()).isEqualTo(exact.warnings().size());
+    }
+
+    @Test
+    void shownStandardErrorsReplaceThePlainOnesAndAreNamed() throws IOException {
+        // the fixture's noise is white, so AR errors would equal the plain ones; Newey-West errors differ
+        CorrectedInference c = SeCorrection.apply(fit, data, CorrectionOptions.of(SeMethod.NEWEY_WEST));
+        ShownInference shown = new ShownInference(c.method().id(), c.description(), c.terms(), c.coefficients(), c.dof());
+        JsonNode root = new ObjectMapper().readTree(ResultJson.of(fit, data).shown(shown)
+                .warnings(List.of(new FitWarning("checked", "a later check"))).toJsonString());
+        JsonNode se = root.get("standard_errors");
+        assertThat(se.get("method").asText()).isEqualTo("hac");
+        assertThat(se.get("description").asText()).isEqualTo(c.description());
+        assertThat(se.get("dof").asInt()).isEqualTo(c.dof());
+        SinusoidReport corrected = (SinusoidReport) c.term("sinusoid 17 Hz");
+        assertThat(root.get("terms").get(3).get("amplitude_se").asDouble()).isEqualTo(corrected.amplitudeSe())
+                .isNotEqualTo(((SinusoidReport) fit.term("sinusoid 17 Hz")).amplitudeSe());
+        for (int i = 0; i < fit.p(); i++) {
+            assertThat(root.get("coefficients").get(i).get("std_error").asDouble()).isEqualTo(c.coefficients().get(i).stdError());
+        }
+        assertThat(root.get("warnings").toString()).isEqualTo("[\"a later check\"]");
+        assertThat(root.get("warning_codes").toString()).isEqualTo("[\"checked\"]");
+        assertThat(new ObjectMapper().readTree(ResultJson.of(fit, data).toJsonString()).has("standard_errors")).isFalse();
+
+        Path f = dir.resolve("coefficients.csv");
+        CoefficientTableWriter.write(f, fit, shown, data.unit(), false);
+        String row = Files.readAllLines(f).stream().filter(l -> l.startsWith("sinusoid 17 Hz,")).findFirst().orElseThrow();
+        String[] cells = row.split(",");
+        assertThat(Double.parseDouble(cells[5])).isEqualTo(corrected.amplitudeSe());
+        assertThat(cells[17]).isEqualTo(Integer.toString(c.dof()));
+    }
+
+    @Test
+    void frequencyTableHoldsTheRefinedFrequenciesExactly() throws IOException {
+        Refinement r = FrequencyRefiner.refine(data, FitFixture.model());
+        Path f = dir.resolve("frequencies.csv");
+        FrequencyTableWriter.write(f, r.frequencies(), 0.99, false);
+        List<String> lines = Files.readAllLines(f);
+        assertThat(lines.get(0)).isEqualTo("term,kind,start [Hz],frequency [Hz],frequency SE [Hz],"
+                + "frequency 99% CI low [Hz],frequency 99% CI high [Hz]");
+        assertThat(lines).hasSize(1 + 2);
+        for (int i = 0; i < 2; i++) {
+            RefinedFrequency want = r.frequencies().get(i);
+            String[] cells = lines.get(1 + i).split(",");
+            assertThat(cells[0]).isEqualTo(want.label());
+            assertThat(cells[1]).isEqualTo(want.kind());
+            assertThat(Double.parseDouble(cells[2])).isEqualTo(want.startHz());
+            assertThat(Double.parseDouble(cells[3])).isEqualTo(want.frequencyHz());
+            assertThat(Double.parseDouble(cells[4])).isEqualTo(want.stdErrorHz());
+            assertThat(Double.parseDouble(cells[5])).isEqualTo(want.ciLowHz());
+            assertThat(Double.parseDouble(cells[6])).isEqualTo(want.ciHighHz());
+        }
+        assertThatThrownBy(() -> FrequencyTableWriter.write(f, r.frequencies(), 0.99, false)).isInstanceOf(OutputException.class);
     }
 }
