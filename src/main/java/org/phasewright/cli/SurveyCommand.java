@@ -179,39 +179,35 @@ final class SurveyCommand implements Callable<Integer> {
         }
         FundamentalCandidate c = result.fundamental().get();
         List<Integer> ks = c.harmonicNumbers();
-        int highest = ks.stream().mapToInt(Integer::intValue).max().orElse(1);
-        boolean fundamentalSeen = ks.contains(1);
-        if (c.explainedPowerFraction() < 0.5 || !fundamentalSeen) {
-            out.println("The best common fundamental, " + Numbers.hertz(round(c.frequencyHz())) + " Hz"
-                    + inUnit(c.frequencyHz()) + ", explains " + Numbers.percent(c.explainedPowerFraction())
-                    + " % of the peaks' power with harmonics " + join(c.harmonicNumbers()) + (fundamentalSeen
-                    ? "" : ", though no peak lies at the fundamental itself") + "; the peaks look like separate tones.");
-            out.println("To fit the strongest peaks:");
-            out.println("  phasewright fit " + r.where() + freqOptions(list));
-            return;
-        }
         out.println("Suggested fundamental " + Numbers.hertz(round(c.frequencyHz())) + " Hz" + inUnit(c.frequencyHz())
-                + ": its harmonics " + join(ks) + " explain " + Numbers.percent(c.explainedPowerFraction())
-                + " % of the peaks' power.");
-        if (!c.unexplained().isEmpty()) {
+                + ": its harmonics " + join(ks) + " carry " + Numbers.percent(c.explainedPowerFraction())
+                + " % of the peaks' power; a match this good arises by chance with probability at most "
+                + Numbers.probability(c.chanceProbability()) + ".");
+        List<Peak> leftOver = new ArrayList<>(c.unexplained());
+        StringBuilder extra = new StringBuilder();
+        for (FundamentalCandidate other : result.otherSeries()) {
+            out.println("A second series: " + Numbers.hertz(round(other.frequencyHz())) + " Hz"
+                    + inUnit(other.frequencyHz()) + " with harmonics " + join(other.harmonicNumbers()) + ".");
+            for (HarmonicMatch m : other.harmonics()) {
+                leftOver.removeIf(p -> p.gridIndex() == m.peak().gridIndex());
+                extra.append(" --freq ").append(Frequency.number(round(m.harmonic() * other.frequencyHz())));
+            }
+        }
+        if (!leftOver.isEmpty()) {
             List<String> fs = new ArrayList<>();
-            for (Peak p : c.unexplained()) {
+            for (Peak p : leftOver) {
                 fs.add(Frequency.number(round(p.frequencyHz())) + " Hz");
             }
-            out.println("Peaks it does not explain: " + String.join(", ", fs) + ".");
+            out.println("Peaks no series explains: " + String.join(", ", fs) + ".");
         }
         StringBuilder cmd = new StringBuilder("  phasewright fit " + r.where() + " --fundamental "
-                + Frequency.number(round(c.frequencyHz())) + " --harmonics " + highest);
-        List<Integer> skip = new ArrayList<>();
-        for (int k = 1; k <= highest; k++) {
-            if (!ks.contains(k)) {
-                skip.add(k);
-            }
-        }
+                + Frequency.number(round(c.frequencyHz())) + " --harmonics " + c.highestHarmonic());
+        List<Integer> skip = c.missingHarmonics();
         if (!skip.isEmpty()) {
             cmd.append(" --skip-harmonics ").append(join(skip).replace(" ", ""));
         }
-        cmd.append(freqOptions(c.unexplained().subList(0, Math.min(5, c.unexplained().size()))));
+        cmd.append(extra);
+        cmd.append(freqOptions(leftOver.subList(0, Math.min(5, leftOver.size()))));
         out.println("To fit it:");
         out.println(cmd);
     }

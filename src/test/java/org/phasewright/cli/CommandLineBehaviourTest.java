@@ -199,6 +199,21 @@ class CommandLineBehaviourTest {
     }
 
     @Test
+    void surveySuggestsTheHumSeriesAndTheNoteAsASecondSeries() {
+        CliRun run = CliRun.of("survey", "demo-signals/workshop-hum.wav", "--quiet");
+        assertThat(run.exitCode()).isZero();
+        assertThat(run.out()).contains("Suggested fundamental 49.99").contains("harmonics 1, 3, 5, 7")
+                .contains("A second series: 440 Hz").contains("--skip-harmonics 2,4,6 --freq 440 --freq 880");
+    }
+
+    @Test
+    void surveyOfTidesFindsNoCommonFundamental() {
+        CliRun run = CliRun.of("survey", "demo-signals/harbour-level.csv", "--quiet");
+        assertThat(run.exitCode()).isZero();
+        assertThat(run.out()).contains("No fundamental explains").doesNotContain("--fundamental");
+    }
+
+    @Test
     void surveyOfUnevenRecordSaysSo() {
         CliRun run = CliRun.of("survey", "demo-signals/greenhouse-temperature.csv", "--quiet");
         assertThat(run.exitCode()).isZero();
