@@ -93,6 +93,7 @@ final class DenseQrSolver {
                 r++;
             }
         }
+        double centredTss = centredTotalSumOfSquares(y, sqrtW, swy / sw);
         double[] scale = new double[p];
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < p; j++) {
@@ -151,7 +152,27 @@ final class DenseQrSolver {
             }
         }
         boolean constantInSpan = constantInSpan(qrData, gammas, sqrtW, n, p);
-        return new LeastSquaresSolution(beta, c, rss, n, conditionNumber(rm, p), constantInSpan, swy, swy2, sw, slw);
+        return new LeastSquaresSolution(beta, c, rss, n, conditionNumber(rm, p), constantInSpan, swy, swy2, sw, slw,
+                centredTss);
+    }
+
+    /**
+     * sum w (v - m)^2 about a first-pass weighted mean m, the deviations formed from the weighted values
+     * y = sqrt(w) v as y - sqrt(w) m, then corrected by the second pass's residual mean (the two-pass
+     * algorithm with correction, Chan, Golub and LeVeque 1983). The one-pass form sum w v^2 - (sum w v)^2 / sum w
+     * loses every digit when the mean is large beside the spread.
+     */
+    private static double centredTotalSumOfSquares(double[] y, double[] sqrtW, double mean) {
+        double ss = 0;
+        double sd = 0;
+        double sw = 0;
+        for (int i = 0; i < y.length; i++) {
+            double d = y[i] - sqrtW[i] * mean;
+            ss += d * d;
+            sd += sqrtW[i] * d;
+            sw += sqrtW[i] * sqrtW[i];
+        }
+        return Math.max(0, ss - sd * sd / sw);
     }
 
     /**

@@ -53,8 +53,7 @@ public final class Fitter {
         double tc = dof > 0 ? Distributions.studentTQuantile(0.5 + options.level() / 2, dof) : Double.NaN;
 
         boolean centred = sol.constantInSpan();
-        double tss = centred ? sol.weightedSumY2() - sol.weightedSumY() * sol.weightedSumY() / sol.sumWeights()
-                : sol.weightedSumY2();
+        double tss = centred ? sol.centredTss() : sol.weightedSumY2();
         double r2 = 1 - sol.rss() / tss;
         int k0 = centred ? 1 : 0;
         double adjR2 = dof > 0 ? 1 - (1 - r2) * (n - k0) / dof : Double.NaN;

@@ -8,7 +8,8 @@ package org.phasewright.model;
  * errors by the delta method with the full a-b covariance:
  * var A = (a^2 Vaa + 2ab Vab + b^2 Vbb) / A^2 and var phi = (b^2 Vaa - 2ab Vab + a^2 Vbb) / A^4.
  * The amplitude interval is A -/+ t* se(A), its lower end clipped at 0. The F-test (2 numerator
- * degrees of freedom) tests a = b = 0.
+ * degrees of freedom) tests a = b = 0. At A = 0 exactly the phase, its error and the amplitude's
+ * delta-method error (and so its interval) are undefined and reported as NaN; the F-test still holds.
  *
  * @param harmonic harmonic number k within a harmonic series, 0 for a lone sinusoid
  */
@@ -30,9 +31,11 @@ public record SinusoidReport(String label, double frequencyHz, int harmonic, dou
         double vab = pair.covariance(0, 1);
         double vbb = pair.covariance(1, 1);
         double amp = Math.hypot(a, b);
-        double ampSe = Math.sqrt((a * a * vaa + 2 * a * b * vab + b * b * vbb)) / amp;
-        double phase = Math.atan2(b, a);
-        double phaseSe = Math.sqrt(b * b * vaa - 2 * a * b * vab + a * a * vbb) / (amp * amp);
+        // at A = 0 the phase is undefined and the delta method's gradients (a, b) / A have no limit
+        boolean zero = !(amp > 0);
+        double ampSe = zero ? Double.NaN : Math.sqrt((a * a * vaa + 2 * a * b * vab + b * b * vbb)) / amp;
+        double phase = zero ? Double.NaN : Math.atan2(b, a);
+        double phaseSe = zero ? Double.NaN : Math.sqrt(b * b * vaa - 2 * a * b * vab + a * a * vbb) / (amp * amp);
         double half = pair.tCritical() * ampSe;
         GroupTest test = pair.groupTest();
         double deg = Math.toDegrees(phase);
