@@ -33,7 +33,7 @@ import org.phasewright.series.Series;
  *       sum s^4 / (1-rho)^4 over the non-constant score series x_j e; scaled by n/(n-p). Cost O(n m p^2).</li>
  *   <li>{@code local_spectrum}: for each sinusoid, the plain covariance of its cos/sin pair is scaled by
  *       the ratio of the residual periodogram averaged over +-B resolution bins around its frequency
- *       (excluding the bin itself, where the fit removed the residual) to the residual variance: the
+ *       (excluding the bin itself, where the fit removed the residual) to the residual variance RSS / (n - p): the
  *       large-sample variance of a least-squares sinusoid coefficient is 2 S(f) / n for noise of spectral
  *       density S (Hannan 1970, Multiple Time Series, ch. VII). Other terms keep plain errors. Works for
  *       uneven and gappy records (direct Fourier sums). Cost O(n B) per sinusoid.</li>
@@ -219,9 +219,13 @@ public final class SeCorrection {
         for (double v : e) {
             var += v * v;
         }
-        var /= rows.n;
+        // the unbiased residual variance, as in the plain s^2: white noise then gives ratios near 1 whatever p is
+        var /= rows.n - rows.p;
         double record = series.duration();
-        double[][] cov = plain.covariance();
+        double[][] cov = new double[rows.p][];
+        for (int i = 0; i < rows.p; i++) {
+            cov[i] = plain.covariance()[i].clone(); // never scale the plain fit's own matrix
+        }
         List<LocalNoise> notes = new ArrayList<>();
         for (int k = 0; k < design.terms().size(); k++) {
             Term term = design.terms().get(k);
