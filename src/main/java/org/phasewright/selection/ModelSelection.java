@@ -24,7 +24,8 @@ import org.phasewright.stats.Distributions;
  * <p>{@link #growHarmonics}: starting from a base model, harmonics k = 1, 2, ... of a fundamental are
  * added while the F-test of the newest harmonic has p below {@code alpha}; up to {@code patience}
  * consecutive non-significant harmonics may be tried and left out (skipped) before growth stops, and
- * growth stops below the Nyquist frequency of uniform records. Each test is a sequential test at
+ * growth stops below the Nyquist frequency of uniform records and before a harmonic that would leave no residual
+ * degrees of freedom. Each test is a sequential test at
  * level alpha, not a simultaneous one.
  *
  * <p>Cost: one fit per step (2 n p^2 flops each).
@@ -156,9 +157,14 @@ public final class ModelSelection {
                 reason = "harmonic " + k + " cannot be fitted: " + e.getMessage();
                 break;
             }
+            if (f.dof() <= 0) {
+                reason = "harmonic " + k + " would leave no residual degrees of freedom (the model would interpolate"
+                        + " the " + f.n() + " samples), so it cannot be tested";
+                break;
+            }
             int df1 = f.p() - current.p();
             double fStat = ((current.rss() - f.rss()) / df1) / (f.rss() / f.dof());
-            double pv = f.dof() > 0 ? Distributions.fSurvival(Math.max(0, fStat), df1, f.dof()) : Double.NaN;
+            double pv = Distributions.fSurvival(Math.max(0, fStat), df1, f.dof());
             labels.add("harmonic " + k + " of " + TermSpec.hertz(fundamentalHz));
             models.add(m);
             fits.add(f);

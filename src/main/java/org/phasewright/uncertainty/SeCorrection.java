@@ -25,7 +25,8 @@ import org.phasewright.series.Series;
  *       {@code maxArOrder}), then {@code V = C (X' Gamma X) C}, C = (X'WX)^-1, Gamma the AR model's
  *       autocovariance matrix over the observed grid — the parametric sandwich of feasible GLS theory
  *       (e.g. Cochrane and Orcutt 1949; Prais and Winsten 1954 for the AR(1) case). Reference
- *       distribution t with n - p - (AR order) degrees of freedom. Uniform records only (gaps allowed).
+ *       distribution t with n - p - (AR order) degrees of freedom, the order kept below n - p. Uniform records
+ *       only (gaps allowed).
  *       Cost O(n K p^2), K the lag at which the AR autocovariance falls below 1e-10 of the variance.</li>
  *   <li>{@code hac}: Newey and West (1987, Econometrica 55, 703) with Bartlett weights 1 - k/(m+1) and
  *       m from the AR(1) plug-in rule of Andrews (1991, Econometrica 59, 817, eq. 6.4):
@@ -89,7 +90,8 @@ public final class SeCorrection {
         DenseRows rows = DenseRows.of(design, series);
         double[] beta = plain.beta();
         double[] e = rows.residuals(beta);
-        ArNoise ar = ArNoise.fit(e, rows.index, options.maxArOrder());
+        // each AR coefficient costs a degree of freedom of the t reference: keep at least one
+        ArNoise ar = ArNoise.fit(e, rows.index, Math.min(options.maxArOrder(), plain.dof() - 1));
         int p = rows.p;
         // the residual variance understates the noise variance by (n - p) / n; rescale as s^2 does
         double scale = rows.n / (double) (rows.n - p);

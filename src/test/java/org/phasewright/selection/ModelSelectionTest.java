@@ -91,4 +91,20 @@ class ModelSelectionTest {
         assertThat(all.kept()).hasSize(23);
         assertThat(all.stopReason()).contains("Nyquist");
     }
+
+    @Test
+    void growthStopsBeforeAHarmonicThatLeavesNoResidualDegreesOfFreedom() {
+        // 11 samples with f0 = 1/11 cycles/sample: intercept plus harmonics 1..5 make p = n = 11, an exact
+        // interpolation where no F-test exists (F on (2, 0) degrees of freedom is undefined; textbook).
+        Random rnd = new Random(11);
+        double[] y = new double[11];
+        for (int i = 0; i < y.length; i++) {
+            y[i] = Math.cos(2 * Math.PI * i / 11.0) + 0.3 * Math.cos(4 * Math.PI * i / 11.0) + 0.01 * rnd.nextGaussian();
+        }
+        HarmonicGrowthResult g = ModelSelection.growHarmonics(Series.uniform(0, 1, y), ModelSpec.of(new Intercept()), 1 / 11.0,
+                0.9999, 10, 20, FitOptions.defaults());
+        assertThat(g.kept()).containsExactly(1, 2, 3, 4);
+        assertThat(g.stopReason()).contains("harmonic 5").contains("no residual degrees of freedom");
+        assertThat(g.table().steps()).allSatisfy(step -> assertThat(step.dof()).isPositive());
+    }
 }

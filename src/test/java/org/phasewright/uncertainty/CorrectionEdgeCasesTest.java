@@ -60,4 +60,24 @@ class CorrectionEdgeCasesTest {
         }
         assertThat(sum / records).isCloseTo(1.0, within(0.06));
     }
+
+    @Test
+    void arOrderNeverExhaustsTheResidualDegreesOfFreedom() {
+        // 64 samples, 61 columns (intercept and 30 harmonics on the Fourier grid): 3 residual degrees of freedom.
+        // The residuals of such a fit are strongly structured and the AIC picks orders up to the limit; the t
+        // reference on n - p - order degrees of freedom must stay defined (at least 1; common practice).
+        for (long seed = 1; seed <= 3; seed++) {
+            Random rnd = new Random(seed);
+            double[] z = new double[64];
+            for (int i = 0; i < z.length; i++) {
+                z[i] = rnd.nextGaussian();
+            }
+            Series s = Series.uniform(0, 1, z);
+            FitResult plain = Fitter.fit(s, ModelSpec.of(new Intercept(), new HarmonicSeries(1.0 / 64, 30)));
+            assertThat(plain.dof()).isEqualTo(3);
+            CorrectedInference ar = SeCorrection.apply(plain, s, new CorrectionOptions(SeMethod.AR_NOISE, 10, 12));
+            assertThat(ar.dof()).isEqualTo(plain.dof() - ar.arCoefficients().length).isGreaterThanOrEqualTo(1);
+            assertThat(ar.coefficients().get(0).pValue()).isBetween(0.0, 1.0);
+        }
+    }
 }
