@@ -13,9 +13,13 @@ import org.phasewright.stats.Distributions;
  *   <li>Durbin-Watson statistic (Durbin and Watson 1950, Biometrika 37, 409), over consecutive
  *       observed pairs;</li>
  *   <li>sample autocorrelation r_k = sum (e_t - m)(e_{t+k} - m) / sum (e_t - m)^2 with products only
- *       where both samples are observed (the usual treatment of gaps, Parzen 1963);</li>
+ *       where both samples are observed, scaled by (n - k) / m_k for the m_k pairs present at lag k (the
+ *       pair-count normalisation of amplitude-modulated series, Parzen 1963; without gaps m_k = n - k and
+ *       r_k is the usual estimator);</li>
  *   <li>Ljung-Box Q (Ljung and Box 1978, Biometrika 65, 297) against chi-square with h degrees of
- *       freedom (no ARMA parameters are fitted to regression residuals);</li>
+ *       freedom (no ARMA parameters are fitted to regression residuals); across gaps each lag's term is
+ *       weighted by m_k / (n - k), the share of its pairs present, and lags without pairs are left out of
+ *       the sum and of the degrees of freedom;</li>
  *   <li>Jarque-Bera (Jarque and Bera 1987, Int. Stat. Rev. 55, 163) against chi-square with 2.</li>
  * </ul>
  * Residuals are treated as equally spaced in index; for uneven sampling the lags are in samples,
@@ -59,7 +63,7 @@ public final class ResidualDiagnostics {
         }
         double dw = durbinWatson(residual);
         double[] acf = autocorrelation(residual, maxLag);
-        LjungBox lb = ljungBox(acf, n);
+        LjungBox lb = ljungBox(acf, n, pairCounts(residual, maxLag));
         JarqueBera jb = jarqueBera(residual);
         List<FitWarning> warnings = new ArrayList<>();
         if (lb.pValue() < WARN_P) {
@@ -132,14 +136,29 @@ public final class ResidualDiagnostics {
         double[] r = new double[maxLag];
         for (int k = 1; k <= maxLag; k++) {
             double s = 0;
+            int pairs = 0;
             for (int i = 0; i + k < e.length; i++) {
                 if (!Double.isNaN(e[i]) && !Double.isNaN(e[i + k])) {
                     s += (e[i] - mean) * (e[i + k] - mean);
+                    pairs++;
                 }
             }
-            r[k - 1] = s / c0;
+            r[k - 1] = pairs == 0 ? Double.NaN : s / c0 * ((n - k) / (double) pairs);
         }
         return r;
+    }
+
+    /** m_1..m_maxLag: the pairs of observed residuals k samples apart. */
+    static int[] pairCounts(double[] e, int maxLag) {
+        int[] m = new int[maxLag];
+        for (int k = 1; k <= maxLag; k++) {
+            for (int i = 0; i + k < e.length; i++) {
+                if (!Double.isNaN(e[i]) && !Double.isNaN(e[i + k])) {
+                    m[k - 1]++;
+                }
+            }
+        }
+        return m;
     }
 
     /** Ljung-Box Q from r_1..r_h of n residuals. */
@@ -151,6 +170,27 @@ public final class ResidualDiagnostics {
         }
         q *= n * (n + 2.0);
         return new LjungBox(q, h, h, Distributions.chiSquareSurvival(q, h));
+    }
+
+    /**
+     * Ljung-Box Q across gaps: Q = n (n + 2) sum (m_k / (n - k)) r_k^2 / (n - k) over the lags with pairs
+     * (m_k of them), on as many degrees of freedom. Under white noise r_k has variance near
+     * (n - k)^2 / (n^2 m_k), so each term stays near 1; without gaps this is {@link #ljungBox(double[], int)}.
+     */
+    static LjungBox ljungBox(double[] acf, int n, int[] pairs) {
+        int h = acf.length;
+        double q = 0;
+        int used = 0;
+        for (int k = 1; k <= h; k++) {
+            if (pairs[k - 1] == 0) {
+                continue;
+            }
+            double nk = n - k;
+            q += pairs[k - 1] / nk * acf[k - 1] * acf[k - 1] / nk;
+            used++;
+        }
+        q *= n * (n + 2.0);
+        return new LjungBox(q, h, used, used > 0 ? Distributions.chiSquareSurvival(q, used) : Double.NaN);
     }
 
     /** Jarque-Bera from the moment skewness and kurtosis of the observed residuals. */

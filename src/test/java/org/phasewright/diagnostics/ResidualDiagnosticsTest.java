@@ -105,4 +105,53 @@ class ResidualDiagnosticsTest {
         assertThatThrownBy(() -> ResidualDiagnostics.of(new double[] {1, 2, 3}, 1)).hasMessageContaining("at least 8");
         assertThatThrownBy(() -> ResidualDiagnostics.of(new double[20], 25)).hasMessageContaining("between 1 and 19");
     }
+
+    private static double[] everyThirdMissing(double[] e) {
+        double[] g = e.clone();
+        for (int i = 2; i < g.length; i += 3) {
+            g[i] = Double.NaN;
+        }
+        return g;
+    }
+
+    @Test
+    void autocorrelationAcrossGapsIsNormalisedByThePairsPresent() {
+        // Parzen (1963), spectral analysis with missing observations: the lag-k autocovariance of an
+        // amplitude-modulated series is the sum of the products present over the number of pairs present. With
+        // every third sample missing only half the lag-1 pairs exist, so dividing by all n halves r_1.
+        // AR(1) phi = 0.6, 3000 samples: r_1 has SD about 0.02 (Bartlett); band +-0.06.
+        Random rnd = new Random(31);
+        double[] ar = new double[3000];
+        double prev = 0;
+        for (int i = 0; i < ar.length; i++) {
+            prev = 0.6 * prev + rnd.nextGaussian();
+            ar[i] = prev;
+        }
+        double[] r = ResidualDiagnostics.autocorrelation(everyThirdMissing(ar), 3);
+        assertThat(r[0]).isCloseTo(0.6, within(0.06));
+        assertThat(r[1]).isCloseTo(0.36, within(0.06));
+        assertThat(r[2]).isCloseTo(0.216, within(0.06));
+    }
+
+    @Test
+    void ljungBoxKeepsItsSizeAcrossGaps() {
+        // White noise with every third sample missing, 600 records of 300 (200 observed), 10 lags: the 5% test
+        // should reject about 5% of the time (chi-square reference of Ljung and Box 1978 with the lag-k terms
+        // weighted by the pairs present; binomial SD 0.9%, band [2%, 8%]).
+        Random rnd = new Random(77);
+        int rejections = 0;
+        int records = 600;
+        for (int r = 0; r < records; r++) {
+            double[] e = new double[300];
+            for (int i = 0; i < e.length; i++) {
+                e[i] = rnd.nextGaussian();
+            }
+            ResidualReport report = ResidualDiagnostics.of(everyThirdMissing(e), 10);
+            assertThat(report.n()).isEqualTo(200);
+            if (report.ljungBox().pValue() < 0.05) {
+                rejections++;
+            }
+        }
+        assertThat(rejections / (double) records).isBetween(0.02, 0.08);
+    }
 }
