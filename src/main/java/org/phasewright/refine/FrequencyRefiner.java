@@ -34,7 +34,8 @@ import org.phasewright.stats.Distributions;
  * <p>Standard errors: {@code s^2 [(J'J)^-1]} for the frequencies, which by the Schur complement equals
  * the frequency block of {@code s^2 (G'G)^-1} with G the Jacobian in all parameters (linear and
  * nonlinear), s^2 = RSS / (n - p - q) — the usual asymptotic covariance of nonlinear least squares
- * (e.g. Seber and Wild 1989, Nonlinear Regression, ch. 2). Columns are evaluated internally in time
+ * (e.g. Seber and Wild 1989, Nonlinear Regression, ch. 2). The linear block of the same matrix gives the
+ * amplitudes and phases with the frequencies' uncertainty included ({@link JointInference}). Columns are evaluated internally in time
  * measured from the record's midpoint, which spans the same space and leaves the projected residual
  * and the frequency errors unchanged while keeping the Jacobian well conditioned.
  *
@@ -154,7 +155,9 @@ public final class FrequencyRefiner {
         }
         FitResult fit = Fitter.fit(series, refined, options.fit());
         warnings.addAll(fit.warnings());
-        return new Refinement(refined, out, fit, it, converged, cur.rss, dof, warnings);
+        JointInference.Result joint = JointInference.of(fit, series, pb, theta, inv, cur.rss, dof);
+        return new Refinement(refined, out, fit, it, converged, cur.rss, dof, warnings, joint.coefficients(),
+                joint.covariance(), joint.terms());
     }
 
     /** Residual sum of squares and the Kaufman normal equations at one set of frequencies. */
@@ -256,6 +259,11 @@ public final class FrequencyRefiner {
 
         int termIndex(int j) {
             return termIndex[j];
+        }
+
+        /** Harmonic numbers of parameter j's cos/sin pairs, in column order (1 for a sinusoid). */
+        int[] harmonics(int j) {
+            return harmonics[j];
         }
 
         /** Highest harmonic multiplying parameter j. */
