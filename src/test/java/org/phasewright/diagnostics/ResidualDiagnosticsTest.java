@@ -83,6 +83,7 @@ class ResidualDiagnosticsTest {
 
     @Test
     void ljungBoxHasItsNominalSizeUnderWhiteNoise() {
+        // Ljung and Box (1978): Q is close to chi-square(h) under white noise even for n = 200.
         // Monte Carlo: 600 white-noise records of 200; the 5% test should reject about 5% of the time
         // (binomial SD 0.9%; the band [2%, 8%] is more than 3 SD each side).
         Random rnd = new Random(99);

@@ -109,6 +109,7 @@ class FitBehaviourTest {
             }
         }
         ModelSpec spec = ModelSpec.of(new Intercept(), new Sinusoid(0.2 / (2 * Math.PI)));
+        // common practice: an integer weight w counts the sample w times in the sum of squares
         FitResult a = Fitter.fit(weighted, spec);
         FitResult b = Fitter.fit(Series.at(t2, y2), spec);
         for (int j = 0; j < a.p(); j++) {
@@ -227,6 +228,7 @@ class FitBehaviourTest {
         double[] y = TestSignals.addNoise(TestSignals.tones(rate, n, new double[][] {{1, 5, 0}, {0.5, 12, 0}}, 0), 0.3,
                 new Random(8));
         FitResult fit = Fitter.fit(Series.uniform(0, rate, y), ModelSpec.of(new Intercept(), new Sinusoid(5), new Sinusoid(12)));
+        // textbook: for mutually orthogonal column groups the extra sums of squares partition the regression sum
         double a = ((SinusoidReport) fit.terms().get(1)).varianceShare();
         double b = ((SinusoidReport) fit.terms().get(2)).varianceShare();
         // on-grid tones are orthogonal, so their extra sums of squares add up to R^2 exactly

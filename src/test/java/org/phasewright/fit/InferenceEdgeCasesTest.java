@@ -85,4 +85,50 @@ class InferenceEdgeCasesTest {
         assertThat(r.phaseSeDeg()).isNaN();
         assertThat(r.amplitudeSe()).isNaN();
     }
+
+    @Test
+    void weightedLeveragesAndLogLikelihoodFollowTheScaledProblem() {
+        // Weighted least squares is ordinary least squares on sqrt(w) y and sqrt(w) X (textbook). Reference for the
+        // leverages: Commons Math 3 OLSMultipleLinearRegression.calculateHat on the row-scaled design; for the
+        // log-likelihood the Gaussian density with variances sigma^2 / w_i at sigma^2 = RSS_w / n (textbook).
+        Random rnd = new Random(13);
+        int n = 150;
+        double[] t = new double[n];
+        double[] y = new double[n];
+        double[] w = new double[n];
+        for (int i = 0; i < n; i++) {
+            t[i] = i;
+            w[i] = 0.2 + 3 * rnd.nextDouble();
+            y[i] = 1 + Math.cos(2 * Math.PI * 0.09 * i) + rnd.nextGaussian() / Math.sqrt(w[i]);
+        }
+        Series s = Series.builder().times(t).values(y).weights(w).build();
+        FitResult fit = Fitter.fit(s, ModelSpec.of(new Intercept(), new Sinusoid(0.09)), FitOptions.defaults().withLeverages(true));
+        double[] rows = fit.design().rowsAt(t);
+        double[][] xs = new double[n][fit.p()];
+        double[] ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < fit.p(); j++) {
+                xs[i][j] = Math.sqrt(w[i]) * rows[i * fit.p() + j];
+            }
+            ys[i] = Math.sqrt(w[i]) * y[i];
+        }
+        OLSMultipleLinearRegression ols = new OLSMultipleLinearRegression(0);
+        ols.setNoIntercept(true);
+        ols.newSampleData(ys, xs);
+        double[] h = fit.leverages().orElseThrow();
+        for (int i = 0; i < n; i++) {
+            assertThat(h[i]).isCloseTo(ols.calculateHat().getEntry(i, i), within(1e-12));
+        }
+        double rss = ols.calculateResidualSumOfSquares();
+        double sigma2 = rss / n;
+        double logL = 0;
+        double[] e = ols.estimateResiduals();
+        for (int i = 0; i < n; i++) {
+            double var = sigma2 / w[i];
+            double r = e[i] / Math.sqrt(w[i]);
+            logL += -0.5 * Math.log(2 * Math.PI * var) - r * r / (2 * var);
+        }
+        assertThat(fit.logLikelihood()).isCloseTo(logL, within(1e-9 * Math.abs(logL)));
+        assertThat(fit.rss()).isCloseTo(rss, within(1e-10 * rss));
+    }
 }

@@ -41,6 +41,7 @@ class FrequencyRefinerTest {
         Series s = Series.uniform(0, rate, y);
         ModelSpec start = ModelSpec.of(new Intercept(), new PolynomialTrend(1), new Sinusoid(11.3), new Sinusoid(24.0));
         Refinement r = FrequencyRefiner.refine(s, start);
+        // noise-free: the least-squares optimum is the generating signal itself (common practice)
         assertThat(r.converged()).isTrue();
         assertThat(r.frequencies()).extracting(RefinedFrequency::frequencyHz)
                 .satisfiesExactly(f -> assertThat(f).isCloseTo(11.37, within(1e-9)), f -> assertThat(f).isCloseTo(23.91, within(1e-9)));
@@ -135,6 +136,7 @@ class FrequencyRefinerTest {
         }
         Series s = Series.at(t, y);
         Refinement r = SineFit.fourParameter(s);
+        // noise-free: the generating tone is the exact optimum (common practice)
         assertThat(r.frequencies().get(0).frequencyHz()).isCloseTo(3.3333, within(1e-9));
         assertThat(((SinusoidReport) r.fit().terms().get(1)).amplitude()).isCloseTo(0.8, within(1e-9));
         assertThat(r.converged()).isTrue();
@@ -157,6 +159,7 @@ class FrequencyRefinerTest {
         Refinement r = FrequencyRefiner.refine(s, start);
         RefinedFrequency f0 = r.frequencies().get(0);
         RefinedFrequency tone = r.frequencies().get(1);
+        // the generating frequencies within 4 reported standard errors (asymptotic normality; common practice)
         assertThat(f0.frequencyHz()).isCloseTo(20.04, within(4 * f0.stdErrorHz()));
         assertThat(tone.frequencyHz()).isCloseTo(77.7, within(4 * tone.stdErrorHz()));
         assertThat(tone.stdErrorHz()).isLessThan(1e-3);

@@ -72,6 +72,8 @@ class ModelSelectionTest {
     void harmonicsAreAddedWhileSignificant() {
         Series s = signal(2000, new double[] {1, 0.5, 0.3, 0.2}, 2);
         HarmonicGrowthResult g = ModelSelection.growHarmonics(s, ModelSpec.of(new Intercept()), 2.1, 0.01, 0, 30, FitOptions.defaults());
+        // the invented signal holds harmonics 1..4, each at A / se(A) above 20 (se = 0.3 sqrt(2 / 2000)), so each
+        // F-test rejects with certainty; harmonic 5 is absent (truth of the scenario)
         assertThat(g.kept()).containsExactly(1, 2, 3, 4);
         assertThat(g.stopReason()).contains("harmonic 5 is not significant");
         assertThat(g.table().steps()).hasSize(6);

@@ -32,6 +32,7 @@ class SeCorrectionTest {
         ModelSpec spec = ModelSpec.of(new Intercept(), new Sinusoid(0.3 / (2 * Math.PI)));
         FitResult plain = Fitter.fit(s, spec);
         CorrectedInference ar = SeCorrection.apply(plain, s, CorrectionOptions.of(SeMethod.AR_NOISE));
+        // white noise: AIC picks order 0 and Gamma = s^2 I makes the sandwich C (X' s^2 I X) C = s^2 C (textbook)
         assertThat(ar.arCoefficients()).isEmpty();
         for (int j = 0; j < plain.p(); j++) {
             assertThat(ar.coefficients().get(j).stdError()).isCloseTo(plain.coefficients().get(j).stdError(),
@@ -55,6 +56,8 @@ class SeCorrectionTest {
         Series s = Series.uniform(0, 100, y);
         ModelSpec spec = ModelSpec.of(new Intercept(), new PolynomialTrend(1), new HarmonicSeries(1.5, 3, List.of(2)));
         CorrectedInference ar = SeCorrection.fit(s, spec, CorrectionOptions.of(SeMethod.AR_NOISE), FitOptions.defaults());
+        // the generating phi = 0.6; the Yule-Walker estimate has SD about sqrt((1 - phi^2) / n) = 0.015
+        // (Brockwell and Davis 1991, sec. 8.2)
         assertThat(ar.arCoefficients()[0]).isCloseTo(0.6, within(0.05));
         HarmonicSeriesReport h = (HarmonicSeriesReport) ar.term("harmonics of 1.5 Hz");
         HarmonicSeriesReport p = (HarmonicSeriesReport) ar.plain().term("harmonics of 1.5 Hz");
