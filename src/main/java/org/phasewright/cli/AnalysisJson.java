@@ -31,7 +31,8 @@ final class AnalysisJson {
         a.refinement().ifPresent(r -> doc.refinement(r, givenUnits(r, a.plan())));
         a.robust().ifPresent(doc::robust);
         if (a.residuals().isPresent()) {
-            doc.diagnostics(a.residuals().get(), ResultJson.LEAST_SQUARES_RESIDUALS, Suggestions.forResiduals(a));
+            doc.diagnostics(a.residuals().get(), a.robust().isPresent() ? ResultJson.ROBUST_RESIDUALS
+                    : ResultJson.LEAST_SQUARES_RESIDUALS, Suggestions.forResiduals(a));
         } else {
             doc.diagnosticsSkipped(a.noResidualChecks());
         }

@@ -15,7 +15,8 @@ import org.phasewright.model.ModelSpec;
 /**
  * The fit command's files, all written by the io package's writers (each atomically): the result
  * JSON ({@link ResultJson}, given the analysis' parts by {@link AnalysisJson}), the
- * components CSV of the least-squares fit ({@link ComponentsCsvWriter}), the coefficient table CSV
+ * components CSV of the fit shown ({@link ComponentsCsvWriter}: the least-squares fit, or the robust fit
+ * with each sample's weight), the coefficient table CSV
  * with the standard errors shown ({@link CoefficientTableWriter}), the refined frequencies
  * ({@link FrequencyTableWriter}, with {@code --refine}) and the model file ({@link ModelFile}).
  * Existing files are replaced, as a re-run of an analysis expects.
@@ -51,7 +52,11 @@ final class FitOutputs {
     static void writeDirectory(Path dir, Analysis a, TermOptions terms) throws IOException {
         Files.createDirectories(dir);
         LoadedRecord record = a.record();
-        ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.fit(), record.series(), true);
+        if (a.robust().isPresent()) {
+            ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.robust().get(), record.series(), true);
+        } else {
+            ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.fit(), record.series(), true);
+        }
         CoefficientTableWriter.write(dir.resolve(COEFFICIENTS), a.fit(), a.shown(), record.unit(), true);
         if (a.refinement().isPresent()) {
             FrequencyTableWriter.write(dir.resolve(FREQUENCIES), a.refinement().get().frequencies(), a.fit().level(), true);
