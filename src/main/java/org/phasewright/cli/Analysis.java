@@ -21,7 +21,8 @@ import org.phasewright.uncertainty.RobustResult;
  * @param refinement  the frequency refinement ({@code --refine}), if asked for
  * @param robust      the robust fit ({@code --robust}), if asked for
  * @param shown       the term reports and coefficients shown, and which standard errors they carry
- * @param residuals   the residual checks of {@link #fit()}; empty when the record is too short for them
+ * @param residuals   the residual checks of the fit shown: the robust fit's residuals when {@link #robust()} is
+ *                    present, else those of {@link #fit()}; empty when the record is too short for them
  * @param noResidualChecks why there are no residual checks, or null
  * @param comparison  the term-by-term comparison ({@code --compare-terms}), if asked for
  * @param warnings    every warning: the fit's (or the refinement's, which include the fit's), the

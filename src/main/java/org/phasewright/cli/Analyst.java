@@ -37,7 +37,8 @@ import org.phasewright.uncertainty.SeMethod;
  *   <li>{@code --refine}: {@link FrequencyRefiner#refine} on the (grown) model, else {@link Fitter#fit};</li>
  *   <li>the standard errors shown: {@link RobustFit#fit} for {@code --robust}, else
  *       {@link SeCorrection#apply} for {@code --errors} other than plain, else the fit's own;</li>
- *   <li>{@link ResidualDiagnostics#of} on the least-squares residuals;</li>
+ *   <li>{@link ResidualDiagnostics#of} on the residuals of the fit shown: the robust fit's components
+ *       under {@code --robust}, else the least-squares fit's;</li>
  *   <li>{@code --compare-terms}: {@link ModelSelection#nested} on the final model.</li>
  * </ol>
  * Nothing is computed here beyond choosing and ordering the steps.
@@ -101,8 +102,10 @@ final class Analyst {
 
         Optional<ResidualReport> residuals = Optional.empty();
         String noChecks = null;
+        double[] residual = robust.map(r -> r.components().residual()).orElse(fit.components().residual());
         try {
-            ResidualReport rep = checks.lags == null ? ResidualDiagnostics.of(fit) : ResidualDiagnostics.of(fit, checks.lags);
+            ResidualReport rep = checks.lags == null ? ResidualDiagnostics.of(residual)
+                    : ResidualDiagnostics.of(residual, checks.lags);
             residuals = Optional.of(rep);
             warnings.addAll(rep.warnings());
         } catch (IllegalArgumentException e) {

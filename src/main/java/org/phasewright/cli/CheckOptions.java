@@ -28,7 +28,8 @@ final class CheckOptions {
 
     @Option(names = "--robust", paramLabel = "LOSS", converter = LossConverter.class,
             description = "Fit robustly against spikes and dropouts (iteratively reweighted least squares) with the"
-                    + " huber or bisquare loss, and show the robust estimates with their standard errors.")
+                    + " huber or bisquare loss, and show the robust estimates with their standard errors, the robust fit's"
+                    + " summary and residual checks; --out writes its components with each sample's weight.")
     RobustLoss robust;
 
     @Option(names = "--lags", paramLabel = "N",

@@ -1,15 +1,11 @@
 package org.phasewright.cli;
 
-import com.fasterxml.jackson.core.JsonProcessingException;
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import org.phasewright.io.ModelFile;
-import org.phasewright.io.write.AtomicFile;
 import org.phasewright.io.write.CoefficientTableWriter;
 import org.phasewright.io.write.ComponentsCsvWriter;
 import org.phasewright.io.write.FrequencyTableWriter;
@@ -18,8 +14,9 @@ import org.phasewright.model.ModelSpec;
 
 /**
  * The fit command's files, all written by the io package's writers (each atomically): the result
- * JSON ({@link ResultJson}, with the analysis' further fields from {@link AnalysisJson}), the
- * components CSV of the least-squares fit ({@link ComponentsCsvWriter}), the coefficient table CSV
+ * JSON ({@link ResultJson}, given the analysis' parts by {@link AnalysisJson}), the
+ * components CSV of the fit shown ({@link ComponentsCsvWriter}: the least-squares fit, or the robust fit
+ * with each sample's weight), the coefficient table CSV
  * with the standard errors shown ({@link CoefficientTableWriter}), the refined frequencies
  * ({@link FrequencyTableWriter}, with {@code --refine}) and the model file ({@link ModelFile}).
  * Existing files are replaced, as a re-run of an analysis expects.
@@ -29,8 +26,6 @@ final class FitOutputs {
     static final String COEFFICIENTS = "coefficients.csv";
     static final String FREQUENCIES = "frequencies.csv";
     static final String RESULT = "result.json";
-
-    private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
 
     private FitOutputs() {
     }
@@ -57,30 +52,25 @@ final class FitOutputs {
     static void writeDirectory(Path dir, Analysis a, TermOptions terms) throws IOException {
         Files.createDirectories(dir);
         LoadedRecord record = a.record();
-        ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.fit(), record.series(), true);
+        if (a.robust().isPresent()) {
+            ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.robust().get(), record.series(), true);
+        } else {
+            ComponentsCsvWriter.write(dir.resolve(COMPONENTS), a.fit(), record.series(), true);
+        }
         CoefficientTableWriter.write(dir.resolve(COEFFICIENTS), a.fit(), a.shown(), record.unit(), true);
         if (a.refinement().isPresent()) {
             FrequencyTableWriter.write(dir.resolve(FREQUENCIES), a.refinement().get().frequencies(), a.fit().level(), true);
         }
-        String text = text(jsonTree(a, terms));
-        AtomicFile.writeText(dir.resolve(RESULT), true, w -> w.write(text));
+        AnalysisJson.document(a, terms).write(dir.resolve(RESULT), true);
     }
 
     static void printJson(PrintWriter out, Analysis a, TermOptions terms) {
-        out.print(text(jsonTree(a, terms)));
+        out.print(AnalysisJson.document(a, terms).toJsonString());
         out.flush();
     }
 
     /** The result document as a tree, for a batch's JSON array. */
     static ObjectNode jsonTree(Analysis a, TermOptions terms) {
-        return AnalysisJson.tree(a, terms);
-    }
-
-    private static String text(ObjectNode tree) {
-        try {
-            return MAPPER.writeValueAsString(tree) + "\n";
-        } catch (JsonProcessingException e) {
-            throw new IllegalStateException("cannot happen for a tree of plain nodes", e);
-        }
+        return AnalysisJson.document(a, terms).tree();
     }
 }

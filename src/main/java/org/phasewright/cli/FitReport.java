@@ -11,6 +11,7 @@ import org.phasewright.model.ScalarReport;
 import org.phasewright.model.SinusoidReport;
 import org.phasewright.model.TermReport;
 import org.phasewright.series.Series;
+import org.phasewright.uncertainty.RobustResult;
 
 /**
  * The readable report of one fit, laid out for Phasewright: the harmonics grown and the refined
@@ -41,7 +42,11 @@ final class FitReport {
         scalars(out, a.plan(), shown, lvl, tag);
         groups(out, a.plan(), shown, tag);
         a.comparison().ifPresent(t -> SelectionReport.comparison(out, t));
-        summary(out, r, record.unit(), a.robust().isPresent());
+        if (a.robust().isPresent()) {
+            robustSummary(out, a.robust().get(), r, record.unit());
+        } else {
+            summary(out, r, record.unit());
+        }
         ResidualCheckReport.print(out, a);
         warnings(out, a);
         out.flush();
@@ -50,11 +55,8 @@ final class FitReport {
     private static void standardErrors(PrintWriter out, Analysis a) {
         out.println("Standard errors shown: " + ErrorHandler.sentence(a.shown().description()));
         a.robust().ifPresent(rr -> {
-            out.println("  Robust fit: the amplitudes, phases and estimates below are the robust ones; " + rr.downweighted()
-                    + " of " + a.fit().n() + " samples carry weight below 0.5; robust residual scale "
-                    + Numbers.sig(rr.scale()) + unitSuffix(a.record().unit()) + "; " + rr.iterations() + " iterations"
-                    + (rr.converged() ? "." : " (not converged)."));
-            out.println("  The fit summary, residual checks and components are those of the least-squares fit.");
+            out.println("  Robust fit: the amplitudes, phases and estimates below are the robust ones, and so are the fit"
+                    + " summary, the residual checks and the components.");
         });
         out.println();
     }
@@ -157,8 +159,22 @@ final class FitReport {
         out.println();
     }
 
-    private static void summary(PrintWriter out, FitResult r, String unit, boolean robust) {
-        out.println(robust ? "Least-squares fit" : "Fit");
+    /** The robust fit's own summary, with the least-squares fit of the same samples beside it for comparison. */
+    private static void robustSummary(PrintWriter out, RobustResult rr, FitResult ls, String unit) {
+        out.println("Robust fit  (" + rr.loss().id() + " loss)");
+        out.println("  " + rr.n() + " samples used, " + rr.p() + " coefficients, " + rr.dof() + " residual degrees of freedom.");
+        out.println("  Robust residual scale " + Numbers.sig(rr.scale()) + unitSuffix(unit)
+                + " (median absolute residual / 0.6745): the noise level behind the standard errors.");
+        out.println("  " + rr.downweighted() + " of " + rr.n() + " samples carry weight below 0.5; " + rr.iterations()
+                + " iterations" + (rr.converged() ? "." : " (not converged)."));
+        out.println("  Least-squares fit of the same samples, for comparison: residual standard deviation "
+                + Numbers.sig(ls.residualSd()) + unitSuffix(unit) + ", " + Numbers.percentFine(ls.rSquared()) + " % of the "
+                + (ls.centredRSquared() ? "" : "uncentred ") + "variation explained.");
+        out.println();
+    }
+
+    private static void summary(PrintWriter out, FitResult r, String unit) {
+        out.println("Fit");
         out.println("  " + r.n() + " samples used, " + r.p() + " coefficients, " + r.dof() + " residual degrees of freedom.");
         out.println("  Residual standard deviation " + Numbers.sig(r.residualSd())
                 + (unit == null || unit.isEmpty() ? " (in the signal's unit)." : " " + unit + "."));
@@ -187,6 +203,10 @@ final class FitReport {
                 && a.robust().isEmpty()) {
             out.println("  (The standard errors shown already allow for correlated noise: " + a.shown().method()
                     .replace('_', '-') + ".)");
+        }
+        if (a.warned(org.phasewright.diagnostics.ResidualDiagnostics.NON_NORMAL) && a.robust().isPresent()) {
+            out.println("  (The fit shown is already robust: samples far from it carry little or no weight, but they"
+                    + " stay in its residuals.)");
         }
         String hint = Suggestions.forResiduals(a);
         if (hint != null) {

@@ -20,7 +20,7 @@ final class ResidualCheckReport {
 
     static void print(PrintWriter out, Analysis a) {
         boolean uneven = !a.record().series().isUniform();
-        out.println("Residual checks  (" + (a.robust().isPresent() ? "least-squares residuals" : "residuals")
+        out.println("Residual checks  (" + (a.robust().isPresent() ? "residuals of the robust fit" : "residuals")
                 + (uneven ? "; lags count samples, not equal times, as the sampling is uneven" : "") + ")");
         if (a.residuals().isEmpty()) {
             out.println("  None: " + ErrorHandler.sentence(a.noResidualChecks()));

@@ -1,6 +1,7 @@
 package org.phasewright.cli;
 
 import java.io.PrintWriter;
+import org.phasewright.io.write.GrowthSteps;
 import org.phasewright.selection.HarmonicGrowthResult;
 import org.phasewright.selection.SelectionStep;
 import org.phasewright.selection.SelectionTable;
@@ -17,14 +18,14 @@ final class SelectionReport {
     }
 
     static void growth(PrintWriter out, HarmonicGrowthResult g, ModelPlan plan, TermOptions terms) {
-        double f0 = AnalysisJson.fundamentalTried(g);
+        double f0 = GrowthSteps.fundamentalHz(g);
         String of = Double.isNaN(f0) ? "the fundamental" : Frequency.number(f0) + " Hz";
         out.println("Harmonics of " + of + " tried one at a time  (kept when p < " + Numbers.sig(terms.growthSignificance())
                 + "; up to " + terms.growthAllowMissing() + " absent in a row stepped over)");
         TextTable t = new TextTable(1, "tried", "columns", "F", "p", "verdict", "AIC", "BIC");
         for (int i = 0; i < g.table().steps().size(); i++) {
             SelectionStep s = g.table().steps().get(i);
-            int k = AnalysisJson.harmonicTried(g, i);
+            int k = GrowthSteps.harmonic(g, i);
             String verdict = i == 0 ? "" : g.kept().contains(k) ? "kept" : "left out";
             t.row(i == 0 ? "other terms only" : "harmonic " + k, Integer.toString(s.columns()), Numbers.sig(s.fStat()),
                     Numbers.pValue(s.pValue()), verdict, Numbers.sig(s.aic()), Numbers.sig(s.bic()));

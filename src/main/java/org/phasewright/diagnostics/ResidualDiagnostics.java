@@ -47,6 +47,15 @@ public final class ResidualDiagnostics {
         return of(fit.components().residual(), maxLag);
     }
 
+    /**
+     * Diagnostics of residuals in record order (NaN = gap) with the default number of lags
+     * {@link #defaultLags(int)} of the observed ones: for fits that are not a {@link FitResult}, such
+     * as the residual component of a robust fit.
+     */
+    public static ResidualReport of(double[] residual) {
+        return of(residual, defaultLags(count(residual)));
+    }
+
     /** min(10, n / 5), at least 1: a common choice of portmanteau lag (common practice). */
     public static int defaultLags(int n) {
         return Math.max(1, Math.min(10, n / 5));

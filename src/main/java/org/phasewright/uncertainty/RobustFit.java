@@ -1,14 +1,21 @@
 package org.phasewright.uncertainty;
 
+import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.List;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.dense.row.factory.LinearSolverFactory_DDRM;
 import org.ejml.interfaces.linsol.LinearSolverDense;
+import org.phasewright.fit.Component;
+import org.phasewright.fit.Components;
 import org.phasewright.fit.FitOptions;
 import org.phasewright.fit.FitResult;
 import org.phasewright.fit.Fitter;
+import org.phasewright.model.Design;
 import org.phasewright.model.ModelException;
 import org.phasewright.model.ModelSpec;
+import org.phasewright.model.Rows;
+import org.phasewright.model.Term;
 import org.phasewright.series.Series;
 
 /**
@@ -22,11 +29,17 @@ import org.phasewright.series.Series;
  * {@code V = K^2 [sum psi(r_i)^2 / (n - p)] / [sum psi'(r_i) / n]^2 s^2 (X'WX)^-1}, r_i = e_i / s,
  * {@code K = 1 + (p / n) var(psi') / mean(psi')^2}; intervals and tests use t on n - p degrees of
  * freedom. Cost per iteration: one weighted QR solve, 2 n p^2 flops.
+ *
+ * <p>The result carries what a least-squares fit carries: term reports and coefficients from the robust
+ * estimates, the robust fit laid out along the record ({@link Components}: observed, fitted, residual,
+ * one part per term), the final robustness weight of every sample and the residual scale behind the
+ * standard errors; plus one O(n p) pass for the components.
  */
 public final class RobustFit {
 
     private static final int MAX_ITERATIONS = 100;
     private static final double TOLERANCE = 1e-9;
+    private static final int BLOCK = 2048;
 
     private RobustFit() {
     }
@@ -95,7 +108,7 @@ public final class RobustFit {
             sumD += d;
             sumD2 += d * d;
             double wi = loss.weight(r, tuning);
-            weightsOut[rows.index[i]] = wi;
+            weightsOut[rows.index[i]] = Math.max(0.0, wi); // psi(r) / r is -0.0 for a rejected negative residual
             if (wi < 0.5) {
                 down++;
             }
@@ -115,8 +128,50 @@ public final class RobustFit {
             }
         }
         int dof = n - p;
-        return new RobustResult(loss, tuning, s, Reports.coefficients(plain.design(), beta, cov, dof, plain.level()), cov,
-                Reports.terms(plain, beta, cov, dof), weightsOut, down, iterations, converged, dof, plain);
+        return new RobustResult(loss, tuning, s, n, p, dof, plain.level(),
+                Reports.coefficients(plain.design(), beta, cov, dof, plain.level()), cov, Reports.terms(plain, beta, cov, dof),
+                components(plain.design(), series, beta), weightsOut, down, iterations, converged, plain);
+    }
+
+    /**
+     * The robust fit along the record, as {@link Fitter} lays out a least-squares fit: each term's part
+     * (its columns times its robust coefficients, by {@link Design#fillRows} in blocks), their sum as the
+     * fitted value wherever the design can be evaluated (gaps too), and observed minus fitted at the
+     * samples that entered the fit (NaN elsewhere). One O(n p) pass.
+     */
+    static Components components(Design design, Series series, double[] beta) {
+        int size = series.size();
+        int p = design.p();
+        List<Term> terms = design.terms();
+        double[][] parts = new double[terms.size()][size];
+        double[] fitted = new double[size];
+        double[] residual = new double[size];
+        double[] observed = series.values();
+        double[] block = new double[BLOCK * p];
+        Rows rows = Rows.of(series);
+        for (int from = 0; from < size; from += BLOCK) {
+            int to = Math.min(size, from + BLOCK);
+            design.fillRows(rows, from, to, block);
+            for (int i = from; i < to; i++) {
+                int off = (i - from) * p;
+                double total = 0;
+                for (int k = 0; k < terms.size(); k++) {
+                    double part = 0;
+                    for (int j = design.offset(k); j < design.offset(k + 1); j++) {
+                        part += block[off + j] * beta[j];
+                    }
+                    parts[k][i] = part;
+                    total += part;
+                }
+                fitted[i] = total;
+                residual[i] = design.isIncluded(i) ? observed[i] - total : Double.NaN;
+            }
+        }
+        List<Component> list = new ArrayList<>();
+        for (int k = 0; k < terms.size(); k++) {
+            list.add(new Component(terms.get(k).label(), terms.get(k).kind(), parts[k]));
+        }
+        return new Components(series.times(), observed, fitted, residual, list);
     }
 
     /** MAD / 0.6745: the median absolute residual scaled to the normal SD. */

@@ -158,6 +158,57 @@ class FitChecksCommandTest {
                 .contains("standard errors: robust bisquare").contains("Least-squares fit");
     }
 
+    /**
+     * Under --robust the summary, the residual checks and components.csv are the robust fit's own: the
+     * written residuals are observed minus the robust fitted values, the weights count as the JSON says, the
+     * spikes get weight near 0 and leave the robust fitted curve within a few noise SDs of the truth.
+     */
+    @Test
+    void robustFitWritesItsOwnComponentsWeightsAndResidualChecks() throws IOException {
+        Path csv = spikyRecord(dir.resolve("spiky.csv"));
+        Path out = dir.resolve("robust");
+        CliRun run = CliRun.of("fit", csv.toString(), "--freq", "5", "--robust", "huber", "--out", out.toString(), "--quiet");
+        assertThat(run.exitCode()).as(run.err()).isZero();
+        List<String> rows = Files.readAllLines(out.resolve("components.csv"));
+        assertThat(rows.get(0)).isEqualTo("time [s],observed,fitted,residual,intercept,sinusoid 5 Hz,weight");
+        assertThat(rows).hasSize(1 + 2000);
+        JsonNode doc = JSON.readTree(out.resolve("result.json").toFile());
+        int low = 0;
+        double worst = 0;
+        double[] residual = new double[2000];
+        for (int i = 0; i < 2000; i++) {
+            String[] c = rows.get(1 + i).split(",");
+            double t = Double.parseDouble(c[0]);
+            double fitted = Double.parseDouble(c[2]);
+            residual[i] = Double.parseDouble(c[3]);
+            assertThat(residual[i]).isEqualTo(Double.parseDouble(c[1]) - fitted);
+            double w = Double.parseDouble(c[6]);
+            assertThat(w).isBetween(0.0, 1.0);
+            if (w < 0.5) {
+                low++;
+            }
+            worst = Math.max(worst, Math.abs(fitted - (0.5 + 1.5 * Math.cos(2 * Math.PI * 5 * t + 1))));
+        }
+        assertThat(low).isEqualTo(doc.get("robust_fit").get("downweighted").asInt()).isGreaterThanOrEqualTo(50);
+        // fitted-value SE is 0.2 sqrt(3 / 2000) = 0.008 (common practice); 0.04 is 5 of them
+        assertThat(worst).isLessThan(0.04);
+        JsonNode d = doc.get("diagnostics");
+        assertThat(d.get("residuals").asText()).isEqualTo("robust");
+        assertThat(d.get("durbin_watson").asDouble())
+                .isEqualTo(org.phasewright.diagnostics.ResidualDiagnostics.durbinWatson(residual));
+        assertThat(d.get("warning_codes").toString()).contains("non_normal_residuals"); // the spikes stay in the residuals
+        assertThat(d.get("suggestion").isNull()).isTrue();
+
+        CliRun text = CliRun.of("fit", csv.toString(), "--freq", "5", "--robust", "huber", "--quiet");
+        assertThat(text.out()).contains("Robust fit  (huber loss)").contains("Robust residual scale")
+                .contains("samples carry weight below 0.5").contains("Residual checks  (residuals of the robust fit)")
+                .contains("The fit shown is already robust").doesNotContain("Suggestion")
+                .doesNotContain("are those of the least-squares fit");
+        JsonNode plain = JSON.readTree(CliRun.of("fit", csv.toString(), "--freq", "5", "--json", "--quiet").out());
+        assertThat(plain.get("diagnostics").get("residuals").asText()).isEqualTo("least_squares");
+        assertThat(plain.get("diagnostics").get("durbin_watson").asDouble()).isNotEqualTo(d.get("durbin_watson").asDouble());
+    }
+
     @Test
     void diagnosticsAreInTheJsonAndTheReport() throws IOException {
         CliRun run = CliRun.of("fit", MOTOR, "--fundamental", "60", "--harmonics", "7", "--lags", "15", "--json", "--quiet");

@@ -75,6 +75,8 @@ class RecoveryTest {
         double sd = Math.sqrt((sum2 - reps * mean * mean) / (reps - 1));
         double meanSe = seSum / reps;
         double theory = sigma * Math.sqrt(2.0 / n);
+        System.out.printf(java.util.Locale.ROOT, "amplitude SE: mean reported / sigma sqrt(2/N) = %.4f, Monte Carlo SD /"
+                + " mean reported SE = %.4f (%d runs)%n", meanSe / theory, sd / meanSe, reps);
         assertThat(meanSe / theory).isCloseTo(1.0, within(0.02));
         // with 400 repetitions the SD's own relative error is about 1/sqrt(2*400) = 3.5%
         assertThat(sd / meanSe).isCloseTo(1.0, within(0.10));

@@ -1,5 +1,8 @@
 package org.phasewright.io.write;
 
+import static org.phasewright.io.write.JsonCells.num;
+import static org.phasewright.io.write.JsonCells.pair;
+
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -8,7 +11,9 @@ import com.fasterxml.jackson.databind.node.JsonNodeFactory;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
+import org.phasewright.diagnostics.ResidualReport;
 import org.phasewright.fit.CoefficientEstimate;
 import org.phasewright.fit.FitResult;
 import org.phasewright.fit.FitWarning;
@@ -22,7 +27,11 @@ import org.phasewright.model.HarmonicSeriesReport;
 import org.phasewright.model.ScalarReport;
 import org.phasewright.model.SinusoidReport;
 import org.phasewright.model.TermReport;
+import org.phasewright.refine.Refinement;
+import org.phasewright.selection.HarmonicGrowthResult;
+import org.phasewright.selection.SelectionTable;
 import org.phasewright.series.Series;
+import org.phasewright.uncertainty.RobustResult;
 
 /**
  * The result of a fit as one JSON document (Jackson tree, two-space indentation), for scripts
@@ -43,6 +52,16 @@ import org.phasewright.series.Series;
  * description, dof} says which they are; {@link #warnings(List)} replaces the fit's warnings by a
  * longer list (the fit's own plus those of later checks).
  *
+ * <p>The checks beyond the plain fit add, in this order after {@code warning_codes}:
+ * {@link #refinement} {@code refined_frequencies} [{name, kind, start_hz, frequency_hz,
+ * frequency_se_hz, frequency_ci_hz, in_unit}] and {@code refinement} {iterations, converged, rss,
+ * dof}; {@link #robust} {@code robust_fit}; {@link #diagnostics} {@code diagnostics} {residuals, n,
+ * lags, durbin_watson, autocorrelation, white_noise_band, ljung_box, jarque_bera, warning_codes,
+ * suggestion}; {@link #harmonicGrowth} {@code harmonic_growth} {fundamental_hz, significance,
+ * allow_missing, limit, kept, stop_reason, steps, best_by_aic, best_by_bic}; {@link #modelComparison}
+ * {@code model_comparison} {steps, best_by_aic, best_by_bic}. A desktop view and the command line
+ * build the same document from the same core results.
+ *
  * <p>Each entry of {@code terms} has {@code name}, {@code kind}, {@code frequency_hz} (sinusoids
  * and harmonic series: the fundamental), {@code amplitude}, {@code amplitude_se},
  * {@code amplitude_ci} [low, high], {@code phase_deg}, {@code phase_se_deg}, {@code f_stat},
@@ -56,6 +75,10 @@ public final class ResultJson {
 
     public static final String FORMAT = "phasewright-result";
     public static final int FORMAT_VERSION = 1;
+    /** {@code diagnostics.residuals} of checks on the least-squares residuals. */
+    public static final String LEAST_SQUARES_RESIDUALS = "least_squares";
+    /** {@code diagnostics.residuals} of checks on the robust fit's residuals. */
+    public static final String ROBUST_RESIDUALS = "robust";
 
     private static final ObjectMapper MAPPER = new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT);
     private static final JsonNodeFactory NODES = JsonNodeFactory.instance;
@@ -68,6 +91,18 @@ public final class ResultJson {
     private WavInfo wav;
     private ShownInference shown;
     private List<FitWarning> warnings;
+    private Refinement refinement;
+    private Map<String, ? extends FrequencyInUnit> refinedUnits = Map.of();
+    private RobustResult robust;
+    private ResidualReport diagnostics;
+    private String diagnosticsOf;
+    private String suggestion;
+    private String diagnosticsSkipped;
+    private HarmonicGrowthResult growth;
+    private double growthSignificance;
+    private int growthAllowMissing;
+    private int growthLimit;
+    private SelectionTable comparison;
 
     private ResultJson(FitResult fit, Series data) {
         this.fit = Objects.requireNonNull(fit, "fit");
@@ -120,6 +155,66 @@ public final class ResultJson {
     /** Writes these warnings instead of the fit's own; the list should include the fit's. */
     public ResultJson warnings(List<FitWarning> all) {
         this.warnings = List.copyOf(all);
+        return this;
+    }
+
+    /** Adds {@code refined_frequencies} and {@code refinement}, in hertz only. */
+    public ResultJson refinement(Refinement r) {
+        return refinement(r, Map.of());
+    }
+
+    /**
+     * Adds {@code refined_frequencies} and {@code refinement}; each refined frequency whose term label is a
+     * key of {@code units} also gets {@code in_unit} with its frequency, standard error and interval in that
+     * unit (the interval's ends in increasing order).
+     */
+    public ResultJson refinement(Refinement r, Map<String, ? extends FrequencyInUnit> units) {
+        this.refinement = Objects.requireNonNull(r, "refinement");
+        this.refinedUnits = Map.copyOf(units);
+        return this;
+    }
+
+    /** Adds {@code robust_fit} with the robust fit's loss, scale, weights summary and convergence. */
+    public ResultJson robust(RobustResult r) {
+        this.robust = Objects.requireNonNull(r, "robust result");
+        return this;
+    }
+
+    /**
+     * Adds {@code diagnostics}: the residual checks of the residuals named by {@code residuals}
+     * ({@link #LEAST_SQUARES_RESIDUALS} or {@link #ROBUST_RESIDUALS}) and a suggestion in words of what
+     * to try next (or null).
+     */
+    public ResultJson diagnostics(ResidualReport report, String residuals, String suggestion) {
+        this.diagnostics = Objects.requireNonNull(report, "residual report");
+        this.diagnosticsOf = Objects.requireNonNull(residuals, "residuals");
+        this.suggestion = suggestion;
+        this.diagnosticsSkipped = null;
+        return this;
+    }
+
+    /** Adds {@code diagnostics} {skipped} saying why there are no residual checks. */
+    public ResultJson diagnosticsSkipped(String reason) {
+        this.diagnosticsSkipped = Objects.requireNonNull(reason, "reason");
+        this.diagnostics = null;
+        return this;
+    }
+
+    /**
+     * Adds {@code harmonic_growth}: the growth's table, kept harmonics and stop reason, with the settings
+     * it ran with (significance level, absent harmonics stepped over, highest harmonic allowed).
+     */
+    public ResultJson harmonicGrowth(HarmonicGrowthResult g, double significance, int allowMissing, int limit) {
+        this.growth = Objects.requireNonNull(g, "growth");
+        this.growthSignificance = significance;
+        this.growthAllowMissing = allowMissing;
+        this.growthLimit = limit;
+        return this;
+    }
+
+    /** Adds {@code model_comparison}: the term-by-term table with AIC and BIC and the best by each. */
+    public ResultJson modelComparison(SelectionTable table) {
+        this.comparison = Objects.requireNonNull(table, "table");
         return this;
     }
 
@@ -191,6 +286,23 @@ public final class ResultJson {
         for (FitWarning w : this.warnings != null ? this.warnings : fit.warnings()) {
             warnings.add(w.message());
             codes.add(w.code());
+        }
+        if (refinement != null) {
+            CheckSections.refinement(root, refinement, refinedUnits);
+        }
+        if (robust != null) {
+            CheckSections.robust(root, robust);
+        }
+        if (diagnostics != null) {
+            CheckSections.diagnostics(root, diagnostics, diagnosticsOf, suggestion);
+        } else if (diagnosticsSkipped != null) {
+            CheckSections.diagnosticsSkipped(root, diagnosticsSkipped);
+        }
+        if (growth != null) {
+            CheckSections.growth(root, growth, growthSignificance, growthAllowMissing, growthLimit);
+        }
+        if (comparison != null) {
+            CheckSections.comparison(root, comparison);
         }
         return root;
     }
@@ -308,28 +420,6 @@ public final class ResultJson {
     private static void notApplicableAmplitude(ObjectNode n) {
         for (String f : new String[] {"amplitude", "amplitude_se", "amplitude_ci", "phase_deg", "phase_se_deg"}) {
             n.putNull(f);
-        }
-    }
-
-    private static void num(ObjectNode n, String field, double v) {
-        if (Double.isFinite(v)) {
-            n.put(field, v);
-        } else {
-            n.putNull(field);
-        }
-    }
-
-    private static void pair(ObjectNode n, String field, double low, double high) {
-        ArrayNode a = n.putArray(field);
-        if (Double.isFinite(low)) {
-            a.add(low);
-        } else {
-            a.addNull();
-        }
-        if (Double.isFinite(high)) {
-            a.add(high);
-        } else {
-            a.addNull();
         }
     }
 }
