@@ -96,6 +96,12 @@ final class Analyst {
         } else if (checks.errors != SeMethod.PLAIN) {
             CorrectedInference c = SeCorrection.apply(fit, series, CorrectionOptions.of(checks.errors));
             shown = new ShownInference(c.method().id(), c.description(), c.terms(), c.coefficients(), c.dof());
+        } else if (refinement.isPresent()) {
+            // the joint covariance: amplitudes' and phases' errors include the refined frequencies' own
+            Refinement r = refinement.get();
+            shown = new ShownInference(PLAIN, SeMethod.PLAIN.description()
+                    + ", with the uncertainty of the refined frequencies included", r.jointTerms(),
+                    r.jointCoefficients(), r.dof());
         } else {
             shown = ShownInference.of(fit, PLAIN, SeMethod.PLAIN.description());
         }

@@ -54,6 +54,10 @@ final class DenseQrSolver {
             throw new ModelException("the model has " + p + " columns but the record has only " + n
                     + " usable samples; remove terms or supply more data");
         }
+        if ((long) n * p > Integer.MAX_VALUE - 16) {
+            throw new ModelException("the dense solver holds the design in memory and cannot take " + n + " samples x "
+                    + p + " columns (over 2^31 values); fit a shorter stretch or fewer terms");
+        }
         double[] x = new double[n * p];
         double[] y = new double[n];
         double[] sqrtW = new double[n];

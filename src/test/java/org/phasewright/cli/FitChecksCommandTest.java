@@ -56,6 +56,17 @@ class FitChecksCommandTest {
         assertThat(series.get("name").asText()).isEqualTo(f.get("name").asText());
         assertThat(series.get("frequency_hz").asDouble()).isEqualTo(f.get("frequency_hz").asDouble());
         assertThat(r.get("warning_codes").toString()).contains("frequency_moved");
+        // phases of a refined fit carry the frequency's own uncertainty (joint covariance; Kay 1993 for one tone):
+        // harmonic 7's phase SE is well above the SE of a fit that takes the refined frequency as known
+        assertThat(r.get("standard_errors").get("description").asText()).contains("refined frequencies included");
+        CliRun known = CliRun.of("fit", PUMP, "--fundamental", Double.toString(f.get("frequency_hz").asDouble()),
+                "--harmonics", "7", "--skip-harmonics", "4-6", "--trend", "poly:2", "--level", "0.99", "--quiet", "--json");
+        JsonNode knownH = JSON.readTree(known.out()).get("terms").get(2).get("harmonics").get(3);
+        JsonNode refinedH = series.get("harmonics").get(3);
+        assertThat(refinedH.get("harmonic").asInt()).isEqualTo(7);
+        assertThat(refinedH.get("phase_se_deg").asDouble()).isGreaterThan(1.5 * knownH.get("phase_se_deg").asDouble());
+        assertThat(refinedH.get("amplitude_se").asDouble()).isCloseTo(knownH.get("amplitude_se").asDouble(),
+                org.assertj.core.data.Percentage.withPercentage(5));
 
         CliRun text = CliRun.of(args);
         assertThat(text.out()).contains("Refined frequencies").contains("fundamental, started at 1470.15 rpm")
