@@ -10,4 +10,5 @@ public record FitWarning(String code, String message) {
     public static final String CLOSE_FREQUENCIES = "close_frequencies";
     public static final String FEW_CYCLES = "few_cycles";
     public static final String FEW_RESIDUAL_DOF = "few_residual_dof";
+    public static final String ROUNDING_LEVEL_RESIDUALS = "rounding_level_residuals";
 }

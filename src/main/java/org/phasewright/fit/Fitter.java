@@ -99,6 +99,12 @@ public final class Fitter {
             warnings.add(new FitWarning(FitWarning.FEW_RESIDUAL_DOF, "only " + dof
                     + " residual degrees of freedom remain: the noise level, and every interval, rests on very few samples"));
         }
+        double meanSquare = sol.weightedSumY2() / sol.sumWeights();
+        if (dof > 0 && sol.rss() / sol.sumWeights() <= 1e-24 * meanSquare) {
+            warnings.add(new FitWarning(FitWarning.ROUNDING_LEVEL_RESIDUALS, "the model reproduces the data to rounding"
+                    + " error (residual RMS below 1e-12 of the signal's RMS): the data look noise-free, so standard errors,"
+                    + " intervals and tests measure only floating-point rounding"));
+        }
         if (sol.conditionNumber() > 1e10) {
             warnings.add(new FitWarning(FitWarning.ILL_CONDITIONED, String.format(Locale.ROOT,
                     "the design is ill-conditioned (condition number %.3g after column scaling): about %d of 16 digits"

@@ -45,6 +45,7 @@ class RecoveryTest {
         assertThat(s.amplitude()).isCloseTo(0.05, within(1e-9));
         assertThat(s.phaseDeg()).isCloseTo(170, within(1e-6));
         assertThat(fit.residualSd()).isLessThan(1e-10);
+        assertThat(fit.warnings()).extracting(FitWarning::code).contains(FitWarning.ROUNDING_LEVEL_RESIDUALS);
     }
 
     /**
