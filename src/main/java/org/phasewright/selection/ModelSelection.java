@@ -79,21 +79,22 @@ public final class ModelSelection {
         return new HarmonicSeries(h.fundamentalHz(), top, skip);
     }
 
-    static SelectionTable table(List<String> labels, List<ModelSpec> models, List<FitResult> fits) {
-        double minAic = Double.POSITIVE_INFINITY;
-        double minBic = Double.POSITIVE_INFINITY;
-        int bestAic = 0;
-        int bestBic = 0;
-        for (int i = 0; i < fits.size(); i++) {
-            if (fits.get(i).aic() < minAic) {
-                minAic = fits.get(i).aic();
-                bestAic = i;
-            }
-            if (fits.get(i).bic() < minBic) {
-                minBic = fits.get(i).bic();
-                bestBic = i;
+    /** Index of the fit with the smallest criterion (the first one on ties). */
+    private static int argMin(List<FitResult> fits, java.util.function.ToDoubleFunction<FitResult> criterion) {
+        int best = 0;
+        for (int i = 1; i < fits.size(); i++) {
+            if (criterion.applyAsDouble(fits.get(i)) < criterion.applyAsDouble(fits.get(best))) {
+                best = i;
             }
         }
+        return best;
+    }
+
+    static SelectionTable table(List<String> labels, List<ModelSpec> models, List<FitResult> fits) {
+        int bestAic = argMin(fits, FitResult::aic);
+        int bestBic = argMin(fits, FitResult::bic);
+        double minAic = fits.get(bestAic).aic();
+        double minBic = fits.get(bestBic).bic();
         List<SelectionStep> steps = new ArrayList<>();
         for (int i = 0; i < fits.size(); i++) {
             FitResult f = fits.get(i);
@@ -200,20 +201,10 @@ public final class ModelSelection {
     /** Each tried harmonic against the last accepted model before it. */
     private static SelectionTable growthTable(List<String> labels, List<ModelSpec> models, List<FitResult> fits,
                                               ModelSpec base, List<Integer> kept) {
-        double minAic = Double.POSITIVE_INFINITY;
-        double minBic = Double.POSITIVE_INFINITY;
-        int bestAic = 0;
-        int bestBic = 0;
-        for (int i = 0; i < fits.size(); i++) {
-            if (fits.get(i).aic() < minAic) {
-                minAic = fits.get(i).aic();
-                bestAic = i;
-            }
-            if (fits.get(i).bic() < minBic) {
-                minBic = fits.get(i).bic();
-                bestBic = i;
-            }
-        }
+        int bestAic = argMin(fits, FitResult::aic);
+        int bestBic = argMin(fits, FitResult::bic);
+        double minAic = fits.get(bestAic).aic();
+        double minBic = fits.get(bestBic).bic();
         List<SelectionStep> steps = new ArrayList<>();
         FitResult anchor = fits.get(0);
         steps.add(new SelectionStep(labels.get(0), anchor.p(), anchor.rss(), anchor.dof(), Double.NaN, anchor.p(), Double.NaN,
