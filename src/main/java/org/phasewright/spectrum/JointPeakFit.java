@@ -283,31 +283,7 @@ final class JointPeakFit {
 
     /** Golden-section maximum of the single-tone amplitude of {@code v} on [lo, hi]; {@code at} if that is higher. */
     private double maximise(double[] v, double lo, double hi, double at) {
-        if (!(hi > lo)) {
-            return at;
-        }
-        double g = (Math.sqrt(5) - 1) / 2;
-        double x1 = hi - g * (hi - lo);
-        double x2 = lo + g * (hi - lo);
-        double v1 = toneAmplitude(v, x1);
-        double v2 = toneAmplitude(v, x2);
-        for (int it = 0; it < SEARCH_STEPS; it++) {
-            if (v1 < v2) {
-                lo = x1;
-                x1 = x2;
-                v1 = v2;
-                x2 = lo + g * (hi - lo);
-                v2 = toneAmplitude(v, x2);
-            } else {
-                hi = x2;
-                x2 = x1;
-                v2 = v1;
-                x1 = hi - g * (hi - lo);
-                v1 = toneAmplitude(v, x1);
-            }
-        }
-        double best = 0.5 * (lo + hi);
-        return toneAmplitude(v, best) >= toneAmplitude(v, at) ? best : at;
+        return GoldenSection.maximise(f -> toneAmplitude(v, f), lo, hi, at, SEARCH_STEPS);
     }
 
     /**
@@ -315,43 +291,13 @@ final class JointPeakFit {
      * floating-mean single tone); 0 where cos and sin are nearly collinear.
      */
     private double toneAmplitude(double[] v, double f) {
-        double sw = 0;
-        double sc = 0;
-        double ss = 0;
-        double sy = 0;
-        double scc = 0;
-        double sss = 0;
-        double scs = 0;
-        double syc = 0;
-        double sys = 0;
+        ToneSums sums = new ToneSums();
         Rotor rot = new Rotor(f);
         for (int i = 0; i < n; i++) {
             rot.at(i);
-            double co = rot.c;
-            double si = rot.s;
-            double wi = w[i];
-            sw += wi;
-            sc += wi * co;
-            ss += wi * si;
-            sy += wi * v[i];
-            scc += wi * co * co;
-            sss += wi * si * si;
-            scs += wi * co * si;
-            syc += wi * v[i] * co;
-            sys += wi * v[i] * si;
+            sums.add(w[i], v[i], rot.c, rot.s);
         }
-        double cc = scc - sc * sc / sw;
-        double sS = sss - ss * ss / sw;
-        double cs = scs - sc * ss / sw;
-        double yc = syc - sy * sc / sw;
-        double ys = sys - sy * ss / sw;
-        double det = cc * sS - cs * cs;
-        if (!(det > 0.01 * (cc + sS) * (cc + sS))) {
-            return 0;
-        }
-        double a = (yc * sS - ys * cs) / det;
-        double b = (ys * cc - yc * cs) / det;
-        return Math.hypot(a, b);
+        return sums.amplitude(sums.totalWeight(), 0.01);
     }
 
     private Rotor[] rotors(double[] f) {

@@ -246,39 +246,13 @@ public final class LombScargle {
         }
 
         double amplitudeAt(double f) {
-            double c = 0;
-            double s = 0;
-            double yb = 0;
-            double cc = 0;
-            double ss = 0;
-            double cs = 0;
-            double yc = 0;
-            double ys = 0;
+            ToneSums sums = new ToneSums();
             for (int i = 0; i < n; i++) {
                 double ang = 2 * Math.PI * f * (t[i] - t[0]);
-                double co = Math.cos(ang);
-                double si = Math.sin(ang);
-                c += w[i] * co;
-                s += w[i] * si;
-                yb += w[i] * y[i];
-                cc += w[i] * co * co;
-                ss += w[i] * si * si;
-                cs += w[i] * co * si;
-                yc += w[i] * y[i] * co;
-                ys += w[i] * y[i] * si;
+                sums.add(w[i], y[i], Math.cos(ang), Math.sin(ang));
             }
-            double ccH = cc - c * c;
-            double ssH = ss - s * s;
-            double csH = cs - c * s;
-            double ycH = yc - yb * c;
-            double ysH = ys - yb * s;
-            double det = ccH * ssH - csH * csH;
-            if (!(det > WELL_POSED * (ccH + ssH) * (ccH + ssH))) {
-                return 0;
-            }
-            double a = (ycH * ssH - ysH * csH) / det;
-            double b = (ysH * ccH - ycH * csH) / det;
-            return Math.hypot(a, b);
+            // the weights are normalised to sum to one
+            return sums.amplitude(1.0, WELL_POSED);
         }
     }
 }

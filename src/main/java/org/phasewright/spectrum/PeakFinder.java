@@ -119,28 +119,7 @@ public final class PeakFinder {
         double half = 0.5 * Math.max(s.gridStepHz(), s.resolutionHz());
         double lo = Math.max(s.frequencyAt(0), f - half);
         double hi = Math.min(s.frequencyAt(s.size() - 1), f + half);
-        double g = (Math.sqrt(5) - 1) / 2;
-        double x1 = hi - g * (hi - lo);
-        double x2 = lo + g * (hi - lo);
-        double v1 = probe.amplitudeAt(x1);
-        double v2 = probe.amplitudeAt(x2);
-        for (int it = 0; it < 32; it++) {
-            if (v1 < v2) {
-                lo = x1;
-                x1 = x2;
-                v1 = v2;
-                x2 = lo + g * (hi - lo);
-                v2 = probe.amplitudeAt(x2);
-            } else {
-                hi = x2;
-                x2 = x1;
-                v2 = v1;
-                x1 = hi - g * (hi - lo);
-                v1 = probe.amplitudeAt(x1);
-            }
-        }
-        double best = 0.5 * (lo + hi);
-        return probe.amplitudeAt(best) >= probe.amplitudeAt(f) ? best : f;
+        return GoldenSection.maximise(probe, lo, hi, f, 32);
     }
 
     /** The window's normalised response for an FFT spectrum, as a function of the offset in hertz. */
