@@ -1,7 +1,6 @@
 package org.phasewright.series;
 
 import java.time.Instant;
-import java.util.Arrays;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
@@ -39,7 +38,7 @@ public final class Series {
         this.times = b.times;
         this.values = b.values;
         this.weights = b.weights;
-        this.covariates = b.covariates;
+        this.covariates = Collections.unmodifiableMap(new LinkedHashMap<>(b.covariates));
         this.origin = b.origin;
         this.name = b.name;
         this.unit = b.unit;
@@ -344,16 +343,7 @@ public final class Series {
                             + " values for " + times.length + " samples");
                 }
             }
-            Builder copy = this;
-            copy.covariates = Collections.unmodifiableMap(new LinkedHashMap<>(covariates));
-            Series s = new Series(copy);
-            this.covariates = new LinkedHashMap<>(covariates);
-            return s;
+            return new Series(this);
         }
-    }
-
-    /** For tests and writers: a defensive equality on content. */
-    public boolean sameSamples(Series o) {
-        return Arrays.equals(times, o.times) && Arrays.equals(values, o.values);
     }
 }
